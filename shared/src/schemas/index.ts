@@ -1,0 +1,5 @@
+export * from './common';
+export * from './auth';
+export * from './users';
+export * from './mail';
+export * from './health';

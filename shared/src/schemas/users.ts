@@ -1,0 +1,67 @@
+import { z } from 'zod';
+import { emailSchema, passwordSchema, roleSchema } from './common';
+
+export const userSchema = z.object({
+  id: z.number(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema,
+  disabled: z.boolean(),
+  createdAt: z.string(),
+  lastLoginAt: z.string().nullable(),
+  version: z.number(),
+});
+export type User = z.infer<typeof userSchema>;
+export const userListResponseSchema = z.object({ users: z.array(userSchema) });
+
+/** Change a member's role or disable them; `version` guards against a stale edit (409). */
+export const updateUserRequestSchema = z
+  .object({
+    role: roleSchema.optional(),
+    disabled: z.boolean({ error: 'must be true or false' }).optional(),
+    version: z.number({ error: 'is required' }).int().min(0),
+  })
+  .refine((body) => body.role !== undefined || body.disabled !== undefined, {
+    message: 'give a role or disabled to change',
+    path: ['role'],
+  });
+export type UpdateUserRequest = z.infer<typeof updateUserRequestSchema>;
+
+export const INVITATION_VALID_HOURS = 72;
+export const PASSWORD_RESET_VALID_HOURS = 1;
+
+export const invitationSchema = z.object({
+  id: z.number(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema,
+  status: z.enum(['pending', 'accepted', 'expired', 'revoked']),
+  invitedBy: z.string(),
+  expiresAt: z.string(),
+  createdAt: z.string(),
+});
+export type Invitation = z.infer<typeof invitationSchema>;
+export const invitationListResponseSchema = z.object({ invitations: z.array(invitationSchema) });
+
+export const createInvitationRequestSchema = z.object({
+  email: emailSchema,
+  name: z.string({ error: 'is required' }).trim().min(1, 'is required').max(120, 'must be at most 120 characters'),
+  role: roleSchema,
+});
+export type CreateInvitationRequest = z.infer<typeof createInvitationRequestSchema>;
+
+export const invitationTokenQuerySchema = z.object({
+  token: z.string({ error: 'is required' }).min(20, 'is not a valid invitation token').max(200, 'is not a valid invitation token'),
+});
+export const invitationLookupResponseSchema = z.object({
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema,
+  workspaceName: z.string(),
+});
+export const acceptInvitationRequestSchema = z.object({
+  token: z.string({ error: 'is required' }).min(20, 'is not a valid invitation token').max(200, 'is not a valid invitation token'),
+  name: z.string({ error: 'is required' }).trim().min(1, 'is required').max(120, 'must be at most 120 characters'),
+  password: passwordSchema,
+});
+export type AcceptInvitationRequest = z.infer<typeof acceptInvitationRequestSchema>;
