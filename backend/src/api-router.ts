@@ -1,0 +1,23 @@
+import { Router } from 'express';
+import { authRouter } from './auth/auth.router';
+import { healthRouter } from './health/health.router';
+import { homeRouter } from './home/home.router';
+import { invitationsRouter } from './invitations/invitations.router';
+import { mailRouter } from './mail/mail.router';
+import { buildOpenApiDocument } from './openapi/registry';
+import { usersRouter } from './users/users.router';
+
+/** Every API module mounts here; each router checks its own session and role rules. */
+export const apiRouter = Router();
+apiRouter.use('/health', healthRouter);
+apiRouter.use('/auth', authRouter);
+apiRouter.use('/home', homeRouter);
+apiRouter.use('/users', usersRouter);
+apiRouter.use('/invitations', invitationsRouter);
+apiRouter.use('/mail-messages', mailRouter);
+
+let openApiDocument: ReturnType<typeof buildOpenApiDocument> | null = null;
+apiRouter.get('/openapi.json', (_req, res) => {
+  openApiDocument ??= buildOpenApiDocument();
+  res.json(openApiDocument);
+});

@@ -1,0 +1,53 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import cookieParser from 'cookie-parser';
+import { projectRoot, config } from './config';
+import { passport } from './auth/passport';
+import { sameOriginGuard } from './auth/auth.middleware';
+import { apiNotFound, errorHandler } from './http/error-handler';
+import { apiRouter } from './api-router';
+
+export interface AppOptions {
+  /** Serve the built front end from this folder (default dist/ when it exists). */
+  staticDir?: string | null;
+  /** Extra origins allowed to make cookie-authenticated writes (the Vite dev server). */
+  extraOrigins?: string[];
+}
+
+/** Builds the Express app: security headers, JSON limits, the API under /api, the built SPA. */
+export function createApp(options: AppOptions = {}): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'default-src': ["'self'"],
+          'img-src': ["'self'", 'data:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'frame-src': ["'self'", 'blob:'],
+          'script-src': ["'self'"],
+        },
+      },
+    }),
+  );
+  app.use(cookieParser());
+  app.use(express.json({ limit: '512kb' }));
+  app.use(passport.initialize());
+  const extraOrigins = options.extraOrigins ?? [];
+  app.use('/api', sameOriginGuard(() => [...extraOrigins, ...(config.appUrl ? [new URL(config.appUrl).origin] : [])]));
+  app.use('/api', apiRouter);
+  app.use('/api', apiNotFound);
+
+  const staticDir = options.staticDir === undefined ? path.join(projectRoot, 'dist') : options.staticDir;
+  if (staticDir && existsSync(path.join(staticDir, 'index.html'))) {
+    app.use(express.static(staticDir, { index: false, maxAge: '1h' }));
+    // Client-side routes: every non-API GET answers the SPA's index.html.
+    app.get('/*splat', (_req, res) => res.sendFile(path.join(staticDir, 'index.html')));
+  }
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,70 @@
+import { Op } from 'sequelize';
+import { PASSWORD_RESET_VALID_HOURS } from '@shared/schemas';
+import { appUrl } from '../app-url';
+import { sequelize } from '../db/sequelize';
+import { AppError } from '../http/errors';
+import { sendMail } from '../mail/mailer';
+import { linkMail } from '../mail/templates';
+import { UserRecord } from '../users/user.model';
+import { recordAudit } from '../audit/audit.service';
+import { hashToken, newOneTimeToken } from './one-time-token';
+import { hashPassword } from './passwords';
+import { PasswordResetTokenRecord } from './password-reset-token.model';
+
+export const PASSWORD_RESET_ANSWER =
+  'If that address belongs to an account, we have sent it a link to choose a new password. The link is valid for 1 hour.';
+
+export async function recordLogin(userId: number): Promise<UserRecord> {
+  const user = await UserRecord.findByPk(userId);
+  if (!user) throw AppError.unauthenticated();
+  await user.update({ lastLoginAt: new Date() }, { silent: true });
+  return user;
+}
+
+/** Starts a reset: the answer never reveals whether the address exists. */
+export async function requestPasswordReset(email: string): Promise<void> {
+  const user = await UserRecord.findOne({ where: { email } });
+  if (!user || user.disabled) return;
+  const { token, tokenHash } = newOneTimeToken();
+  await PasswordResetTokenRecord.create({
+    userId: user.id,
+    tokenHash,
+    expiresAt: new Date(Date.now() + PASSWORD_RESET_VALID_HOURS * 3600_000),
+  });
+  const link = appUrl(`/reset-password?token=${encodeURIComponent(token)}`);
+  const body = linkMail({
+    greeting: `Hello ${user.name},`,
+    lines: ['Someone asked to reset the password of your Packwright account. If it was you, choose a new password within 1 hour.'],
+    linkLabel: 'Choose a new password',
+    link,
+    footer: 'If you did not ask for this, ignore this message; your password stays as it is.',
+  });
+  try {
+    await sendMail({ to: user.email, subject: 'Reset your Packwright password', ...body, workspaceId: user.workspaceId });
+  } catch (error) {
+    // The caller gets the same answer either way; a failed send must not reveal the account.
+    console.error('[mail] password reset e-mail could not be sent:', error);
+  }
+}
+
+/** Spends a reset token and sets the password; older sessions stop working. */
+export async function confirmPasswordReset(token: string, password: string): Promise<void> {
+  const passwordHash = await hashPassword(password);
+  await sequelize.transaction(async (transaction) => {
+    const record = await PasswordResetTokenRecord.findOne({
+      where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
+    if (!record) {
+      throw new AppError({ status: 400, code: 'invalid_token', message: 'This reset link is invalid, already used or expired. Ask for a new one.' });
+    }
+    const user = await UserRecord.findByPk(record.userId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!user || user.disabled) {
+      throw new AppError({ status: 400, code: 'invalid_token', message: 'This reset link is invalid, already used or expired. Ask for a new one.' });
+    }
+    await record.update({ usedAt: new Date() }, { transaction });
+    await user.update({ passwordHash, tokenVersion: user.tokenVersion + 1 }, { transaction });
+    await recordAudit({ workspaceId: user.workspaceId, actorId: user.id, action: 'user.password_reset', entityType: 'user', entityId: user.id }, transaction);
+  });
+}

@@ -1,0 +1,42 @@
+import { Router } from 'express';
+import { acceptInvitationRequestSchema, createInvitationRequestSchema, idParamsSchema, invitationTokenQuerySchema } from '@shared/schemas';
+import { requireAuth, requireRole } from '../auth/auth.middleware';
+import { issueSessionToken, setSessionCookie } from '../auth/session-token';
+import { toAuthUser, toSessionUser } from '../auth/session-user';
+import { validate, validated } from '../http/validate';
+import { UserRecord } from '../users/user.model';
+import { Workspace } from '../workspaces/workspace.model';
+import { acceptInvitation, createInvitation, listInvitations, lookupInvitation, revokeInvitation } from './invitations.service';
+import './invitations.openapi';
+
+export const invitationsRouter = Router();
+
+// Public: the invitee has no account yet; the one-time token is the credential.
+invitationsRouter.get('/lookup', validate({ query: invitationTokenQuerySchema }), async (_req, res) => {
+  const { query } = validated(res, { query: invitationTokenQuerySchema });
+  res.json(await lookupInvitation(query.token));
+});
+
+invitationsRouter.post('/accept', validate({ body: acceptInvitationRequestSchema }), async (_req, res) => {
+  const { body } = validated(res, { body: acceptInvitationRequestSchema });
+  const userId = await acceptInvitation(body);
+  const user = await UserRecord.findByPk(userId, { include: [{ model: Workspace, as: 'workspace' }] });
+  const token = issueSessionToken(user!);
+  setSessionCookie(res, token);
+  res.status(201).json({ user: toSessionUser(toAuthUser(user!)), token });
+});
+
+invitationsRouter.get('/', requireAuth, requireRole('admin'), async (req, res) => {
+  res.json({ invitations: await listInvitations(req.user!.workspaceId) });
+});
+
+invitationsRouter.post('/', requireAuth, requireRole('admin'), validate({ body: createInvitationRequestSchema }), async (req, res) => {
+  const { body } = validated(res, { body: createInvitationRequestSchema });
+  res.status(201).json({ invitation: await createInvitation(req.user!, body) });
+});
+
+invitationsRouter.delete('/:id', requireAuth, requireRole('admin'), validate({ params: idParamsSchema }), async (req, res) => {
+  const { params } = validated(res, { params: idParamsSchema });
+  await revokeInvitation(req.user!, params.id);
+  res.status(204).end();
+});

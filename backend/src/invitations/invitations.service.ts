@@ -1,0 +1,132 @@
+import { Op } from 'sequelize';
+import { INVITATION_VALID_HOURS, type AcceptInvitationRequest, type CreateInvitationRequest, type Invitation } from '@shared/schemas';
+import { appUrl } from '../app-url';
+import { sequelize } from '../db/sequelize';
+import { AppError } from '../http/errors';
+import { sendMail } from '../mail/mailer';
+import { linkMail } from '../mail/templates';
+import { recordAudit } from '../audit/audit.service';
+import { hashToken, newOneTimeToken } from '../auth/one-time-token';
+import { hashPassword } from '../auth/passwords';
+import type { AuthUser } from '../auth/session-user';
+import { UserRecord } from '../users/user.model';
+import { Workspace } from '../workspaces/workspace.model';
+import { InvitationRecord } from './invitation.model';
+
+const INVALID_TOKEN = () =>
+  new AppError({ status: 400, code: 'invalid_token', message: 'This invitation link is invalid, already used, revoked or expired. Ask your administrator for a new one.' });
+
+function statusOf(inv: InvitationRecord, now = new Date()): Invitation['status'] {
+  if (inv.acceptedAt) return 'accepted';
+  if (inv.revokedAt) return 'revoked';
+  if (inv.expiresAt <= now) return 'expired';
+  return 'pending';
+}
+
+function toDto(inv: InvitationRecord): Invitation {
+  return {
+    id: inv.id,
+    email: inv.email,
+    name: inv.name,
+    role: inv.role,
+    status: statusOf(inv),
+    invitedBy: inv.invitedBy?.name ?? '',
+    expiresAt: inv.expiresAt.toISOString(),
+    createdAt: inv.createdAt.toISOString(),
+  };
+}
+
+export async function listInvitations(workspaceId: number): Promise<Invitation[]> {
+  const rows = await InvitationRecord.findAll({
+    where: { workspaceId },
+    include: [{ model: UserRecord, as: 'invitedBy', attributes: ['name'] }],
+    order: [['createdAt', 'DESC']],
+  });
+  return rows.map(toDto);
+}
+
+/** Creates an invitation and e-mails its one-time link; if the mail cannot be sent, nothing is kept. */
+export async function createInvitation(actor: AuthUser, input: CreateInvitationRequest): Promise<Invitation> {
+  const existing = await UserRecord.findOne({ where: { email: input.email } });
+  if (existing) {
+    throw new AppError({ status: 409, code: 'email_taken', message: 'That address already belongs to an account.', fields: [{ field: 'email', message: 'already belongs to an account' }] });
+  }
+  const { token, tokenHash } = newOneTimeToken();
+  return sequelize.transaction(async (transaction) => {
+    // A new invitation to the same address replaces any pending one.
+    await InvitationRecord.update(
+      { revokedAt: new Date() },
+      { where: { workspaceId: actor.workspaceId, email: input.email, acceptedAt: null, revokedAt: null }, transaction },
+    );
+    const invitation = await InvitationRecord.create(
+      {
+        workspaceId: actor.workspaceId,
+        email: input.email,
+        name: input.name,
+        role: input.role,
+        tokenHash,
+        invitedById: actor.id,
+        expiresAt: new Date(Date.now() + INVITATION_VALID_HOURS * 3600_000),
+      },
+      { transaction },
+    );
+    await recordAudit({ workspaceId: actor.workspaceId, actorId: actor.id, action: 'invitation.create', entityType: 'invitation', entityId: invitation.id, detail: { email: input.email, role: input.role } }, transaction);
+    const link = appUrl(`/accept-invitation?token=${encodeURIComponent(token)}`);
+    const body = linkMail({
+      greeting: `Hello ${input.name},`,
+      lines: [`${actor.name} invites you to join ${actor.workspace.name} on Packwright as ${input.role}.`, `The link is valid for ${INVITATION_VALID_HOURS} hours and works once.`],
+      linkLabel: 'Accept the invitation and choose a password',
+      link,
+      footer: 'If you did not expect this invitation, you can ignore this message.',
+    });
+    try {
+      await sendMail({ to: input.email, subject: `You are invited to ${actor.workspace.name} on Packwright`, ...body, workspaceId: actor.workspaceId });
+    } catch (error) {
+      console.error('[mail] invitation could not be sent:', error);
+      throw new AppError({ status: 503, code: 'mail_unavailable', message: 'The invitation e-mail could not be sent, so no invitation was created. Check the mail settings and try again.' });
+    }
+    invitation.invitedBy = await UserRecord.findByPk(actor.id, { transaction }) ?? undefined;
+    return toDto(invitation);
+  });
+}
+
+export async function revokeInvitation(actor: AuthUser, id: number): Promise<void> {
+  await sequelize.transaction(async (transaction) => {
+    const inv = await InvitationRecord.findOne({ where: { id, workspaceId: actor.workspaceId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!inv) throw AppError.notFound('Invitation');
+    if (statusOf(inv) !== 'pending') throw AppError.conflict(`This invitation is already ${statusOf(inv)}.`, 'not_pending');
+    await inv.update({ revokedAt: new Date() }, { transaction });
+    await recordAudit({ workspaceId: actor.workspaceId, actorId: actor.id, action: 'invitation.revoke', entityType: 'invitation', entityId: inv.id }, transaction);
+  });
+}
+
+async function findPending(token: string, transaction?: import('sequelize').Transaction) {
+  return InvitationRecord.findOne({
+    where: { tokenHash: hashToken(token), acceptedAt: null, revokedAt: null, expiresAt: { [Op.gt]: new Date() } },
+    include: [{ model: Workspace, as: 'workspace' }],
+    transaction,
+    lock: transaction ? { level: transaction.LOCK.UPDATE, of: InvitationRecord } : undefined,
+  });
+}
+
+export async function lookupInvitation(token: string) {
+  const inv = await findPending(token);
+  if (!inv) throw INVALID_TOKEN();
+  return { email: inv.email, name: inv.name, role: inv.role, workspaceName: inv.workspace?.name ?? '' };
+}
+
+/** Spends the invitation and creates the member in one transaction; answers the new user's id. */
+export async function acceptInvitation(input: AcceptInvitationRequest): Promise<number> {
+  const passwordHash = await hashPassword(input.password);
+  return sequelize.transaction(async (transaction) => {
+    const inv = await findPending(input.token, transaction);
+    if (!inv) throw INVALID_TOKEN();
+    if (await UserRecord.findOne({ where: { email: inv.email }, transaction })) {
+      throw new AppError({ status: 409, code: 'email_taken', message: 'An account with this address already exists. Sign in instead.' });
+    }
+    const user = await UserRecord.create({ workspaceId: inv.workspaceId, email: inv.email, name: input.name, passwordHash, role: inv.role }, { transaction });
+    await inv.update({ acceptedAt: new Date() }, { transaction });
+    await recordAudit({ workspaceId: inv.workspaceId, actorId: user.id, action: 'invitation.accept', entityType: 'invitation', entityId: inv.id }, transaction);
+    return user.id;
+  });
+}

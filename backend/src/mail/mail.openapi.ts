@@ -1,0 +1,4 @@
+import { mailMessageListResponseSchema } from '@shared/schemas';
+import { documentRoute } from '../openapi/registry';
+
+documentRoute({ method: 'get', path: '/mail-messages', summary: 'Messages the local mail sink received for this workspace', tag: 'mail', roles: ['admin'], response: mailMessageListResponseSchema });

@@ -1,0 +1,73 @@
+import type { AddressInfo } from 'node:net';
+import type { Server } from 'node:http';
+import { createApp, type AppOptions } from './app';
+import { setListeningAddress } from './app-url';
+import { config } from './config';
+import { migrateUp } from './db/migrator';
+import { seedDemo } from './db/seed';
+import { sequelize } from './db/sequelize';
+import { closeMailer, useMailSink } from './mail/mailer';
+import { startMailSink, type MailSink } from './mail/mail-sink';
+
+export interface RunningServer {
+  url: string;
+  port: number;
+  mailSinkPort: number | null;
+  stop(): Promise<void>;
+}
+
+export interface StartOptions extends AppOptions {
+  port?: number;
+  migrate?: boolean;
+  seed?: boolean;
+}
+
+/** Starts the whole back end: migrations, demo seed, the local mail sink, and the HTTP server on loopback. */
+export async function startServer(options: StartOptions = {}): Promise<RunningServer> {
+  await sequelize.authenticate();
+  if (options.migrate ?? true) {
+    const applied = await migrateUp();
+    if (applied.length) console.log(`[db] applied migrations: ${applied.join(', ')}`);
+  }
+  if (options.seed ?? true) await seedDemo();
+
+  let sink: MailSink | null = null;
+  if (config.mail.sinkEnabled) {
+    sink = await startMailSink(config.mail.sinkPort);
+    useMailSink(sink.port);
+  }
+
+  const app = createApp(options);
+  const server: Server = await new Promise((resolve, reject) => {
+    const s = app.listen(options.port ?? config.port, config.host, () => resolve(s));
+    s.once('error', reject);
+  });
+  const { port } = server.address() as AddressInfo;
+  const url = `http://${config.host}:${port}`;
+  setListeningAddress(url);
+
+  return {
+    url,
+    port,
+    mailSinkPort: sink?.port ?? null,
+    async stop() {
+      server.closeAllConnections?.();
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      await sink?.close();
+      closeMailer();
+      await sequelize.close();
+    },
+  };
+}
+
+const isMain = process.argv[1] && import.meta.url === new URL(`file://${process.argv[1]}`).href;
+if (isMain) {
+  const running = await startServer();
+  console.log(`[packwright] serving on ${running.url}${running.mailSinkPort ? ` · mail sink on 127.0.0.1:${running.mailSinkPort}` : ''}`);
+  const shutdown = async () => {
+    await running.stop();
+    process.exit(0);
+  };
+  process.once('SIGINT', shutdown);
+  process.once('SIGTERM', shutdown);
+}

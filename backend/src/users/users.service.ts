@@ -1,0 +1,52 @@
+import type { UpdateUserRequest, User } from '@shared/schemas';
+import { sequelize } from '../db/sequelize';
+import { AppError } from '../http/errors';
+import { recordAudit } from '../audit/audit.service';
+import type { AuthUser } from '../auth/session-user';
+import { UserRecord } from './user.model';
+
+export function toUserDto(user: UserRecord): User {
+  return {
+    id: user.id,
+    email: user.email,
+    name: user.name,
+    role: user.role,
+    disabled: user.disabled,
+    createdAt: user.createdAt.toISOString(),
+    lastLoginAt: user.lastLoginAt ? user.lastLoginAt.toISOString() : null,
+    version: user.version,
+  };
+}
+
+export async function listUsers(workspaceId: number): Promise<User[]> {
+  const users = await UserRecord.findAll({ where: { workspaceId }, order: [['name', 'ASC']] });
+  return users.map(toUserDto);
+}
+
+/** Changes a member's role or disables them. Disabling bumps the token version, ending their sessions. */
+export async function updateUser(actor: AuthUser, userId: number, change: UpdateUserRequest): Promise<User> {
+  if (userId === actor.id) {
+    throw new AppError({ status: 400, code: 'self_change', message: 'You cannot change your own role or disable yourself; ask another administrator.', fields: [{ field: 'id', message: 'is your own account' }] });
+  }
+  return sequelize.transaction(async (transaction) => {
+    const user = await UserRecord.findOne({ where: { id: userId, workspaceId: actor.workspaceId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!user) throw AppError.notFound('User');
+    if (user.version !== change.version) throw AppError.staleVersion('user');
+    const before = { role: user.role, disabled: user.disabled };
+    const disabling = change.disabled === true && !user.disabled;
+    await user.update(
+      {
+        role: change.role ?? user.role,
+        disabled: change.disabled ?? user.disabled,
+        tokenVersion: disabling ? user.tokenVersion + 1 : user.tokenVersion,
+        version: user.version + 1,
+      },
+      { transaction },
+    );
+    await recordAudit(
+      { workspaceId: actor.workspaceId, actorId: actor.id, action: 'user.update', entityType: 'user', entityId: user.id, detail: { before, after: { role: user.role, disabled: user.disabled } } },
+      transaction,
+    );
+    return toUserDto(user);
+  });
+}

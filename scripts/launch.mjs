@@ -1,0 +1,33 @@
+#!/usr/bin/env node
+// Entry point for `npm start`, `npm test`, `npm run dev` and `npm run worker` on a fresh clone:
+// installs the npm packages when they are missing, then hands over to the TypeScript script.
+// Plain JavaScript because TypeScript itself is one of the packages it may have to install.
+import { spawnSync, spawn } from 'node:child_process';
+import { existsSync, statSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+const command = process.argv[2];
+if (!command) {
+  console.error('usage: node scripts/launch.mjs <start|test|dev|worker|bench> [args]');
+  process.exit(2);
+}
+
+const marker = path.join(root, 'node_modules', '.package-lock.json');
+const lock = path.join(root, 'package-lock.json');
+const stale = !existsSync(marker) || statSync(lock).mtimeMs > statSync(marker).mtimeMs + 1000;
+if (stale) {
+  console.log('[setup] installing npm packages (npm ci) ...');
+  const result = spawnSync('npm', ['ci', '--no-audit', '--no-fund'], { cwd: root, stdio: 'inherit' });
+  if (result.status !== 0) {
+    console.error('[setup] npm ci failed; see the messages above.');
+    process.exit(result.status ?? 1);
+  }
+}
+
+const tsx = path.join(root, 'node_modules', '.bin', 'tsx');
+const child = spawn(tsx, [path.join(root, 'scripts', `${command}.ts`), ...process.argv.slice(3)], { cwd: root, stdio: 'inherit' });
+// Ctrl-C reaches the whole process group; the child cleans up and exits, and we follow it.
+for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => {});
+child.on('exit', (code, signal) => process.exit(code ?? (signal ? 1 : 0)));
