@@ -68,5 +68,6 @@ export async function seedDemo(): Promise<void> {
       }
     }
   });
+  await import('./seed-steps');
   for (const step of steps) await step(workspaces);
 }

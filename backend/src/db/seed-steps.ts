@@ -1,0 +1,2 @@
+// Each feature's demo seed registers itself with registerSeedStep() when imported here.
+export {};
