@@ -33,6 +33,8 @@ export interface DilutionPoint {
 export interface DilutionSeries {
   solute: string;
   points: DilutionPoint[];
+  /** ΔfH of the solute at infinite dilution ("in ∞ H2O", or the aqueous standard state), if known. */
+  dfH_infinite_kJ_per_mol?: number | null;
   source: string;
 }
 
@@ -61,6 +63,30 @@ export interface SolutionHeatCapacityCoefficients {
   massFractionMax: number;
   tempMinC: number;
   tempMaxC: number;
+  /** Number of data points the coefficients were fitted to. */
+  pointCount?: number;
+  source: string;
+}
+
+/** Freezing-point depression of water by one solute vs mass fraction of the anhydrous solute. */
+export interface FreezingPointPoint {
+  massFraction: number;
+  depressionK: number;
+}
+
+export interface FreezingPointSeries {
+  solute: string;
+  points: FreezingPointPoint[];
+  source: string;
+}
+
+/** Salt–water eutectic: lowest temperature of the liquid, where ice and the salt (hydrate) coexist. */
+export interface EutecticPoint {
+  solute: string;
+  tempC: number;
+  /** Mass fraction of anhydrous solute in the eutectic liquid. */
+  massFraction: number;
+  solidPhases: string;
   source: string;
 }
 
@@ -70,6 +96,10 @@ export interface ChemistryLibrary {
   dilution: DilutionSeries[];
   solubility: SolubilitySeries[];
   solutionHeatCapacity: SolutionHeatCapacityCoefficients[];
+  /** Freezing-point depression series (ice line); optional. */
+  freezingPoint?: FreezingPointSeries[];
+  /** Salt–water eutectics; optional. */
+  eutectics?: EutecticPoint[];
 }
 
 /** A computed value that went outside its data gets a warning, never a silent extrapolation. */

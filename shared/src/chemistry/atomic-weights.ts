@@ -1,0 +1,147 @@
+/**
+ * Standard atomic weights, abridged to five significant figures ("asaw"), for molar masses.
+ *
+ * Source: CIAAW / IUPAC, Prohaska et al., "Standard atomic weights of the elements 2021",
+ * Pure Appl. Chem. 94 (2022) 573, doi:10.1515/pac-2019-0603, Table 1 (abridged values), as
+ * tabulated in the MilanSkocic/ciaaw repository (MIT). Elements without a standard atomic
+ * weight (no stable isotope with a characteristic terrestrial composition) carry `null`.
+ *
+ * Example: `ATOMIC_WEIGHTS.Na.asaw` → 22.990 (g/mol).
+ */
+export interface ElementEntry {
+  /** Atomic number. */
+  z: number;
+  /** Element name as spelled by CIAAW (lower case). */
+  name: string;
+  /** Abridged standard atomic weight in g/mol, or null where none is defined. */
+  asaw: number | null;
+}
+
+export const ATOMIC_WEIGHTS_SOURCE =
+  'CIAAW 2021 abridged standard atomic weights (Prohaska et al., Pure Appl. Chem. 94 (2022) 573)';
+
+export const ATOMIC_WEIGHTS: Readonly<Record<string, ElementEntry>> = {
+  H: { z: 1, name: 'hydrogen', asaw: 1.0080 },
+  He: { z: 2, name: 'helium', asaw: 4.0026 },
+  Li: { z: 3, name: 'lithium', asaw: 6.94 },
+  Be: { z: 4, name: 'beryllium', asaw: 9.0122 },
+  B: { z: 5, name: 'boron', asaw: 10.81 },
+  C: { z: 6, name: 'carbon', asaw: 12.011 },
+  N: { z: 7, name: 'nitrogen', asaw: 14.007 },
+  O: { z: 8, name: 'oxygen', asaw: 15.999 },
+  F: { z: 9, name: 'fluorine', asaw: 18.998 },
+  Ne: { z: 10, name: 'neon', asaw: 20.180 },
+  Na: { z: 11, name: 'sodium', asaw: 22.990 },
+  Mg: { z: 12, name: 'magnesium', asaw: 24.305 },
+  Al: { z: 13, name: 'aluminium', asaw: 26.982 },
+  Si: { z: 14, name: 'silicon', asaw: 28.085 },
+  P: { z: 15, name: 'phosphorus', asaw: 30.974 },
+  S: { z: 16, name: 'sulfur', asaw: 32.06 },
+  Cl: { z: 17, name: 'chlorine', asaw: 35.45 },
+  Ar: { z: 18, name: 'argon', asaw: 39.95 },
+  K: { z: 19, name: 'potassium', asaw: 39.098 },
+  Ca: { z: 20, name: 'calcium', asaw: 40.078 },
+  Sc: { z: 21, name: 'scandium', asaw: 44.956 },
+  Ti: { z: 22, name: 'titanium', asaw: 47.867 },
+  V: { z: 23, name: 'vanadium', asaw: 50.942 },
+  Cr: { z: 24, name: 'chromium', asaw: 51.996 },
+  Mn: { z: 25, name: 'manganese', asaw: 54.938 },
+  Fe: { z: 26, name: 'iron', asaw: 55.845 },
+  Co: { z: 27, name: 'cobalt', asaw: 58.933 },
+  Ni: { z: 28, name: 'nickel', asaw: 58.693 },
+  Cu: { z: 29, name: 'copper', asaw: 63.546 },
+  Zn: { z: 30, name: 'zinc', asaw: 65.38 },
+  Ga: { z: 31, name: 'gallium', asaw: 69.723 },
+  Ge: { z: 32, name: 'germanium', asaw: 72.630 },
+  As: { z: 33, name: 'arsenic', asaw: 74.922 },
+  Se: { z: 34, name: 'selenium', asaw: 78.971 },
+  Br: { z: 35, name: 'bromine', asaw: 79.904 },
+  Kr: { z: 36, name: 'krypton', asaw: 83.798 },
+  Rb: { z: 37, name: 'rubidium', asaw: 85.468 },
+  Sr: { z: 38, name: 'strontium', asaw: 87.62 },
+  Y: { z: 39, name: 'yttrium', asaw: 88.906 },
+  Zr: { z: 40, name: 'zirconium', asaw: 91.224 },
+  Nb: { z: 41, name: 'niobium', asaw: 92.906 },
+  Mo: { z: 42, name: 'molybdenum', asaw: 95.95 },
+  Tc: { z: 43, name: 'technetium', asaw: null },
+  Ru: { z: 44, name: 'ruthenium', asaw: 101.07 },
+  Rh: { z: 45, name: 'rhodium', asaw: 102.91 },
+  Pd: { z: 46, name: 'palladium', asaw: 106.42 },
+  Ag: { z: 47, name: 'silver', asaw: 107.87 },
+  Cd: { z: 48, name: 'cadmium', asaw: 112.41 },
+  In: { z: 49, name: 'indium', asaw: 114.82 },
+  Sn: { z: 50, name: 'tin', asaw: 118.71 },
+  Sb: { z: 51, name: 'antimony', asaw: 121.76 },
+  Te: { z: 52, name: 'tellurium', asaw: 127.60 },
+  I: { z: 53, name: 'iodine', asaw: 126.90 },
+  Xe: { z: 54, name: 'xenon', asaw: 131.29 },
+  Cs: { z: 55, name: 'caesium', asaw: 132.91 },
+  Ba: { z: 56, name: 'barium', asaw: 137.33 },
+  La: { z: 57, name: 'lanthanum', asaw: 138.91 },
+  Ce: { z: 58, name: 'cerium', asaw: 140.12 },
+  Pr: { z: 59, name: 'praseodymium', asaw: 140.91 },
+  Nd: { z: 60, name: 'neodymium', asaw: 144.24 },
+  Pm: { z: 61, name: 'promethium', asaw: null },
+  Sm: { z: 62, name: 'samarium', asaw: 150.36 },
+  Eu: { z: 63, name: 'europium', asaw: 151.96 },
+  Gd: { z: 64, name: 'gadolinium', asaw: 157.25 },
+  Tb: { z: 65, name: 'terbium', asaw: 158.93 },
+  Dy: { z: 66, name: 'dysprosium', asaw: 162.50 },
+  Ho: { z: 67, name: 'holmium', asaw: 164.93 },
+  Er: { z: 68, name: 'erbium', asaw: 167.26 },
+  Tm: { z: 69, name: 'thulium', asaw: 168.93 },
+  Yb: { z: 70, name: 'ytterbium', asaw: 173.05 },
+  Lu: { z: 71, name: 'lutetium', asaw: 174.97 },
+  Hf: { z: 72, name: 'hafnium', asaw: 178.49 },
+  Ta: { z: 73, name: 'tantalum', asaw: 180.95 },
+  W: { z: 74, name: 'tungsten', asaw: 183.84 },
+  Re: { z: 75, name: 'rhenium', asaw: 186.21 },
+  Os: { z: 76, name: 'osmium', asaw: 190.23 },
+  Ir: { z: 77, name: 'iridium', asaw: 192.22 },
+  Pt: { z: 78, name: 'platinum', asaw: 195.08 },
+  Au: { z: 79, name: 'gold', asaw: 196.97 },
+  Hg: { z: 80, name: 'mercury', asaw: 200.59 },
+  Tl: { z: 81, name: 'thallium', asaw: 204.38 },
+  Pb: { z: 82, name: 'lead', asaw: 207.2 },
+  Bi: { z: 83, name: 'bismuth', asaw: 208.98 },
+  Po: { z: 84, name: 'polonium', asaw: null },
+  At: { z: 85, name: 'astatine', asaw: null },
+  Rn: { z: 86, name: 'radon', asaw: null },
+  Fr: { z: 87, name: 'francium', asaw: null },
+  Ra: { z: 88, name: 'radium', asaw: null },
+  Ac: { z: 89, name: 'actinium', asaw: null },
+  Th: { z: 90, name: 'thorium', asaw: 232.04 },
+  Pa: { z: 91, name: 'protactinium', asaw: 231.04 },
+  U: { z: 92, name: 'uranium', asaw: 238.03 },
+  Np: { z: 93, name: 'neptunium', asaw: null },
+  Pu: { z: 94, name: 'plutonium', asaw: null },
+  Am: { z: 95, name: 'americium', asaw: null },
+  Cm: { z: 96, name: 'curium', asaw: null },
+  Bk: { z: 97, name: 'berkelium', asaw: null },
+  Cf: { z: 98, name: 'californium', asaw: null },
+  Es: { z: 99, name: 'einsteinium', asaw: null },
+  Fm: { z: 100, name: 'fermium', asaw: null },
+  Md: { z: 101, name: 'mendelevium', asaw: null },
+  No: { z: 102, name: 'nobelium', asaw: null },
+  Lr: { z: 103, name: 'lawrencium', asaw: null },
+  Rf: { z: 104, name: 'rutherfordium', asaw: null },
+  Db: { z: 105, name: 'dubnium', asaw: null },
+  Sg: { z: 106, name: 'seaborgium', asaw: null },
+  Bh: { z: 107, name: 'bohrium', asaw: null },
+  Hs: { z: 108, name: 'hassium', asaw: null },
+  Mt: { z: 109, name: 'meitnerium', asaw: null },
+  Ds: { z: 110, name: 'darmstadtium', asaw: null },
+  Rg: { z: 111, name: 'roentgenium', asaw: null },
+  Cn: { z: 112, name: 'copernicium', asaw: null },
+  Nh: { z: 113, name: 'nihonium', asaw: null },
+  Fl: { z: 114, name: 'flerovium', asaw: null },
+  Mc: { z: 115, name: 'moscovium', asaw: null },
+  Lv: { z: 116, name: 'livermorium', asaw: null },
+  Ts: { z: 117, name: 'tennesine', asaw: null },
+  Og: { z: 118, name: 'organesson', asaw: null },
+};
+
+/** True when `symbol` is an element symbol known to the table (case-sensitive, e.g. "Fe"). */
+export function isElementSymbol(symbol: string): boolean {
+  return Object.prototype.hasOwnProperty.call(ATOMIC_WEIGHTS, symbol);
+}
