@@ -1,0 +1,83 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router';
+import { Card, CardBody, CardHeader } from '@/components/ui/card';
+import { PageHeader } from '@/components/ui/page-header';
+import { QueryError } from '@/components/ui/query-error';
+import { Loading } from '@/components/ui/spinner';
+import { getInvitationsQueryOptions, useInvitations } from '@/features/users/api/get-invitations';
+import { getUsersQueryOptions, useUsers } from '@/features/users/api/get-users';
+import { InvitationsList } from '@/features/users/components/invitations-list';
+import { InviteForm } from '@/features/users/components/invite-form';
+import { UsersTable } from '@/features/users/components/users-table';
+import { formatCount } from '@/lib/format';
+import { useSessionUser } from '@/lib/session';
+import { requireRole } from '../../../guards';
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    await requireRole(queryClient, request, ['admin']);
+    void queryClient.prefetchQuery(getUsersQueryOptions());
+    void queryClient.prefetchQuery(getInvitationsQueryOptions());
+    return null;
+  };
+
+export default function AdminUsersRoute() {
+  const me = useSessionUser();
+  const users = useUsers();
+  const invitations = useInvitations();
+  const pendingCount = invitations.data?.filter((invitation) => invitation.status === 'pending').length;
+
+  return (
+    <>
+      <title>People · Packwright</title>
+      <PageHeader
+        title="People"
+        description={`Who works in ${me.workspace.name}, and in which role. Disabled members cannot sign in; their work stays.`}
+      />
+
+      <div className="grid gap-gutter xl:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+        <Card>
+          <CardHeader
+            title="Members"
+            description={users.data ? formatCount(users.data.length, 'member') : undefined}
+          />
+          <CardBody>
+            {users.isPending ? (
+              <Loading label="Loading members…" />
+            ) : users.isError ? (
+              <QueryError error={users.error} onRetry={() => void users.refetch()} retrying={users.isFetching} />
+            ) : (
+              <UsersTable users={users.data} currentUserId={me.id} />
+            )}
+          </CardBody>
+        </Card>
+
+        <div className="flex flex-col gap-gutter">
+          <Card>
+            <CardHeader title="Invite someone" description="They get an e-mail with a link to join this workspace." />
+            <CardBody>
+              <InviteForm />
+            </CardBody>
+          </Card>
+
+          <Card>
+            <CardHeader
+              title="Pending invitations"
+              description={pendingCount !== undefined ? formatCount(pendingCount, 'invitation') + ' waiting' : undefined}
+            />
+            <CardBody>
+              {invitations.isPending ? (
+                <Loading label="Loading invitations…" />
+              ) : invitations.isError ? (
+                <QueryError error={invitations.error} onRetry={() => void invitations.refetch()} retrying={invitations.isFetching} />
+              ) : (
+                <InvitationsList invitations={invitations.data} />
+              )}
+            </CardBody>
+          </Card>
+        </div>
+      </div>
+    </>
+  );
+}

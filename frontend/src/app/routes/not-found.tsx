@@ -1,0 +1,5 @@
+import { NotFoundMessage } from '@/components/errors/not-found-message';
+
+export default function NotFoundRoute() {
+  return <NotFoundMessage />;
+}

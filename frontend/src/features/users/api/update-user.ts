@@ -1,0 +1,25 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { userSchema, type UpdateUserRequest, type User } from '@shared/schemas/users';
+import { api } from '@/lib/api-client';
+import { usersKeys } from './get-users';
+
+const updateUserResponseSchema = z.object({ user: userSchema });
+
+/** Changes a member's role or disables them. `version` is the one the admin saw; a stale one answers 409. */
+export async function updateUser({ id, ...body }: UpdateUserRequest & { id: number }): Promise<User> {
+  const { user } = await api.patch(`/api/users/${id}`, { body, schema: updateUserResponseSchema });
+  return user;
+}
+
+export function useUpdateUser() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateUser,
+    onSuccess: (updated) => {
+      queryClient.setQueryData<User[]>(usersKeys.list(), (users) =>
+        users?.map((user) => (user.id === updated.id ? updated : user)),
+      );
+    },
+  });
+}
