@@ -24,6 +24,11 @@ export default defineConfig({
         resolve: { alias },
         test: { name: 'e2e', include: ['tests/e2e/**/*.test.ts'], environment: 'node', testTimeout: 120_000, hookTimeout: 120_000, fileParallelism: false },
       },
+      {
+        // Stops PostgreSQL for real: scripts/test.ts runs it alone, after the others.
+        resolve: { alias },
+        test: { name: 'outage', include: ['tests/outage/**/*.test.ts'], environment: 'node', testTimeout: 60_000, hookTimeout: 60_000 },
+      },
     ],
   },
 });

@@ -54,7 +54,8 @@ try {
     : [
         ['typecheck', bin('tsc'), ['--noEmit', '-p', 'tsconfig.json']],
         ['lint', bin('eslint'), ['--max-warnings', '0', '.']],
-        ['tests', bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${path.join(scratch, 'vitest.json')}`, ...vitestArgs]],
+        ['tests', bin('vitest'), ['run', '--project', 'unit', '--project', 'api', '--project', 'e2e', '--reporter=default', '--reporter=json', `--outputFile.json=${path.join(scratch, 'vitest.json')}`, ...vitestArgs]],
+        ['outage', bin('vitest'), ['run', '--project', 'outage', '--reporter=default', '--reporter=json', `--outputFile.json=${path.join(scratch, 'vitest-outage.json')}`]],
       ];
   exitCode = 0;
   for (const [label, cmd, cmdArgs] of steps) {
@@ -64,11 +65,15 @@ try {
       exitCode = code;
     }
   }
-  const report = path.join(scratch, 'vitest.json');
-  if (existsSync(report)) {
+  const totals = { passed: 0, failed: 0, skipped: 0 };
+  for (const report of ['vitest.json', 'vitest-outage.json'].map((f) => path.join(scratch, f))) {
+    if (!existsSync(report)) continue;
     const summary = JSON.parse(readFileSync(report, 'utf8')) as { numPassedTests: number; numFailedTests: number; numPendingTests: number };
-    console.log(`\n${summary.numPassedTests} passed, ${summary.numFailedTests} failed, ${summary.numPendingTests} skipped`);
+    totals.passed += summary.numPassedTests;
+    totals.failed += summary.numFailedTests;
+    totals.skipped += summary.numPendingTests;
   }
+  console.log(`\n${totals.passed} passed, ${totals.failed} failed, ${totals.skipped} skipped`);
 } catch (error) {
   console.error(error instanceof Error ? error.message : error);
   exitCode = 1;
