@@ -419,7 +419,7 @@ function buildSolubility(): SolubilitySeries[] {
       .filter((x) => x.cell !== '')
       .map(({ t, cell }) => {
         const w = Number(cell);
-        return { tempC: t, gPer100gWater: round((100 * w) / (100 - w), 3), massPercent: w };
+        return { tempC: t, gPer100gWater: (100 * w) / (100 - w), massPercent: w };
       });
     out.push({
       solute: s.solute,
