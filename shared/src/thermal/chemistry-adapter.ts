@@ -1,0 +1,194 @@
+import {
+  defaultChemistryLibrary,
+  enthalpyOfSolutionInfinite,
+  eutectic as findEutecticPoint,
+  findHeatCapacityCoefficients,
+  findSpecies,
+  freezingPoint,
+  integralEnthalpyOfSolution,
+  molarMass,
+  pchip,
+  solubility,
+  soluteApparentHeatCapacity_J_per_gK,
+  type ChemistryLibrary,
+  type ComputationWarning,
+  type SpeciesRecord,
+} from '../chemistry';
+import type { ChemistryPort, EutecticPoint, PortValue } from './chemistry-port';
+
+const NO_WARNINGS: ComputationWarning[] = [];
+const FREEZING_W_MAX = 0.6;
+
+/**
+ * Binds the chemistry layer's functions to the thermal model's {@link ChemistryPort}.
+ *
+ * The thermal model evaluates enthalpies of solution and solubilities thousands of times per
+ * time profile, so each solute's curve is sampled once from the chemistry functions on a dense
+ * grid (ln n from the most concentrated tabulated point to 10⁵ mol/mol; 0–100 °C in 0.5 K) and
+ * re-interpolated with the chemistry layer's own monotone cubic (PCHIP). The sampled curves
+ * reproduce the chemistry functions to better than 0.01 % (tested); outside the grids the
+ * chemistry functions are called directly and their warnings passed on.
+ *
+ * Apparent solute heat capacities use the Laliberté coefficients with the total solute mass
+ * fraction and temperature clamped to the fitted range (continuous in composition, so the
+ * enthalpy stays differentiable), with a warning when clamped; solutes without coefficients
+ * use their solid Cp°/M (mixing rule), also with a warning.
+ *
+ * @example const port = chemistryPort(); port.integralSolutionEnthalpy_kJ_per_mol('NH4NO3(cr)', 10).value // ≈ 20.5
+ */
+export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary()): ChemistryPort {
+  const speciesCache = new Map<string, SpeciesRecord | null>();
+  const species = (key: string): SpeciesRecord | null => {
+    if (!speciesCache.has(key)) {
+      let s: SpeciesRecord | null = null;
+      try {
+        s = findSpecies(lib, key);
+      } catch {
+        s = null;
+      }
+      speciesCache.set(key, s);
+    }
+    return speciesCache.get(key) ?? null;
+  };
+
+  interface DilutionCurve {
+    lnNMin: number;
+    lnNMax: number;
+    f: (lnN: number) => number;
+    infinite: number;
+  }
+  const dilutionCache = new Map<string, DilutionCurve>();
+  const dilution = (key: string): DilutionCurve => {
+    let c = dilutionCache.get(key);
+    if (!c) {
+      const series = lib.dilution.find((d) => d.solute === key);
+      const nMin = series?.points[0]?.nH2O_per_mol ?? 1;
+      const lnNMin = Math.log(nMin);
+      const lnNMax = Math.log(1e5);
+      const xs: number[] = [];
+      const ys: number[] = [];
+      const count = 400;
+      for (let i = 0; i <= count; i++) {
+        const lnN = lnNMin + ((lnNMax - lnNMin) * i) / count;
+        xs.push(lnN);
+        ys.push(integralEnthalpyOfSolution(lib, key, Math.exp(lnN)).dH_kJ_per_mol);
+      }
+      c = { lnNMin, lnNMax, f: pchip(xs, ys), infinite: integralEnthalpyOfSolution(lib, key, Infinity).dH_kJ_per_mol };
+      dilutionCache.set(key, c);
+    }
+    return c;
+  };
+
+  interface SolubilityCurve {
+    f: (t: number) => number;
+  }
+  const solubilityCache = new Map<string, SolubilityCurve>();
+  const solubilityCurve = (key: string): SolubilityCurve => {
+    let c = solubilityCache.get(key);
+    if (!c) {
+      const xs: number[] = [];
+      const ys: number[] = [];
+      for (let t = 0; t <= 100; t += 0.5) {
+        xs.push(t);
+        ys.push(solubility(lib, key, t).gPer100gWater);
+      }
+      c = { f: pchip(xs, ys) };
+      solubilityCache.set(key, c);
+    }
+    return c;
+  };
+
+  interface FreezingCurve {
+    molarMass: number;
+    f: (w: number) => number;
+  }
+  const freezingCache = new Map<string, FreezingCurve | null>();
+  const freezingCurve = (key: string): FreezingCurve | null => {
+    if (!freezingCache.has(key)) {
+      let c: FreezingCurve | null = null;
+      const s = species(key);
+      if (s && freezingPoint(lib, key, 0.01).basis === 'tabulated') {
+        const xs: number[] = [];
+        const ys: number[] = [];
+        for (let i = 0; i <= 600; i++) {
+          const w = (FREEZING_W_MAX * i) / 600;
+          xs.push(w);
+          ys.push(freezingPoint(lib, key, w).depressionK);
+        }
+        c = { molarMass: s.molarMass_g_per_mol, f: pchip(xs, ys) };
+      }
+      freezingCache.set(key, c);
+    }
+    return freezingCache.get(key) ?? null;
+  };
+
+  const port: ChemistryPort = {
+    molarMass_g_per_mol(formulaOrKey) {
+      return molarMass(formulaOrKey.replace(/\((cr|l|g|aq|ai|ao)\)$/, ''));
+    },
+    formationEnthalpy_kJ_per_mol(key) {
+      return species(key)?.dfH_kJ_per_mol ?? null;
+    },
+    heatCapacity_J_per_mol_K(key) {
+      return species(key)?.Cp_J_per_mol_K ?? null;
+    },
+    integralSolutionEnthalpy_kJ_per_mol(key, n): PortValue {
+      const c = dilution(key);
+      if (n === Infinity) return { value: c.infinite, warnings: NO_WARNINGS };
+      const lnN = Math.log(n);
+      if (lnN >= c.lnNMin && lnN <= c.lnNMax) return { value: c.f(lnN), warnings: NO_WARNINGS };
+      const r = integralEnthalpyOfSolution(lib, key, n);
+      return { value: r.dH_kJ_per_mol, warnings: r.warnings };
+    },
+    infiniteDilutionEnthalpy_kJ_per_mol(key) {
+      return dilutionCache.has(key) || lib.dilution.some((d) => d.solute === key)
+        ? dilution(key).infinite
+        : enthalpyOfSolutionInfinite(lib, key).dH_kJ_per_mol;
+    },
+    solubility_g_per_100g(key, tempC): PortValue {
+      if (tempC >= 0 && tempC <= 100) return { value: solubilityCurve(key).f(tempC), warnings: NO_WARNINGS };
+      const r = solubility(lib, key, tempC);
+      return { value: r.gPer100gWater, warnings: r.warnings };
+    },
+    apparentSoluteCp_J_per_gK(key, w, tempC): PortValue {
+      const c = findHeatCapacityCoefficients(lib, key);
+      if (!c) {
+        const s = species(key);
+        const cp = s?.Cp_J_per_mol_K != null ? s.Cp_J_per_mol_K / s.molarMass_g_per_mol : 1.2;
+        return {
+          value: cp,
+          warnings: [
+            {
+              code: 'heat-capacity-fallback',
+              message: `No Laliberté coefficients for ${key}; its apparent heat capacity in solution is taken as the solid's Cp° (${cp.toFixed(2)} J/(g·K), mixing rule, assumption).`,
+            },
+          ],
+        };
+      }
+      const wc = Math.min(Math.max(w, 0), c.massFractionMax);
+      const tc = Math.min(Math.max(tempC, c.tempMinC), c.tempMaxC);
+      const value = soluteApparentHeatCapacity_J_per_gK(c, tc, 1 - wc);
+      const warnings =
+        wc !== w || tc !== tempC
+          ? [
+              {
+                code: 'heat-capacity-clamped',
+                message: `Solution of ${key} outside the Laliberté fitted range (w ≤ ${c.massFractionMax.toFixed(3)}, ${c.tempMinC}–${c.tempMaxC} °C); the solute's apparent heat capacity is held at the edge of the range.`,
+              },
+            ]
+          : NO_WARNINGS;
+      return { value, warnings };
+    },
+    freezingPointDepression_K(key, molality) {
+      const c = freezingCurve(key);
+      if (!c) return null;
+      const w = (molality * c.molarMass) / 1000 / (1 + (molality * c.molarMass) / 1000);
+      return w <= FREEZING_W_MAX ? c.f(w) : freezingPoint(lib, key, w).depressionK;
+    },
+    eutectic(key): EutecticPoint | null {
+      const e = findEutecticPoint(lib, key);
+      return e ? { tempC: e.tempC, soluteMassFraction: e.massFraction, source: e.source } : null;
+    },
+  };
+  return port;
+}
