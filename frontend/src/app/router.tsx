@@ -5,6 +5,7 @@ import { RouterProvider } from 'react-router/dom';
 import { authKeys } from '@/features/auth/api/get-me';
 import { setUnauthorizedHandler, signInHref } from '@/lib/api-client';
 import { RouteError } from '@/components/errors/route-error';
+import { AppSplash } from '@/components/layouts/app-splash';
 
 /**
  * A route module (app/routes/**) exports a default component and, optionally,
@@ -36,6 +37,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
     {
       id: 'root',
       errorElement: <RouteError />,
+      hydrateFallbackElement: <AppSplash />,
       children: [
         // Public pages: no session needed.
         { path: 'sign-in', lazy: () => import('./routes/sign-in').then(load) },

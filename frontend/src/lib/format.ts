@@ -60,6 +60,7 @@ export function formatRelative(value: string | number | Date | null | undefined,
   const date = toDate(value);
   if (!date) return empty;
   let amount = (date.getTime() - now.getTime()) / 1000;
+  if (Math.abs(amount) < 45) return 'just now';
   for (const [unit, size] of RELATIVE_STEPS) {
     if (Math.abs(amount) < size) return relativeFormat.format(Math.round(amount), unit);
     amount /= size;

@@ -32,12 +32,12 @@ export function AppLayout({ workspaceName, personName, personEmail, role, nav, o
 
       <header className="relative bg-ink-900 text-ink-100">
         <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-3 px-gutter py-3">
-          <div className="flex min-w-0 items-center gap-4">
+          <div className="flex min-w-0 flex-wrap items-center gap-x-4 gap-y-1">
             <Link to="/" className="rounded-control" aria-label="Packwright home">
               <Wordmark />
             </Link>
             <span aria-hidden="true" className="hidden h-6 w-px bg-ink-700 sm:block" />
-            <p className="hidden min-w-0 truncate text-small font-semibold text-ink-200 sm:block" title="Workspace">
+            <p className="min-w-0 truncate text-small font-semibold text-ink-200" title="Workspace">
               <span className="sr-only">Workspace: </span>
               {workspaceName}
             </p>
@@ -51,11 +51,10 @@ export function AppLayout({ workspaceName, personName, personEmail, role, nav, o
               <p className="text-caption text-ink-300">{ROLE_LABELS[role]}</p>
             </div>
             <Button
-              variant="ghost"
+              variant="inverse"
               size="sm"
               onClick={onSignOut}
               pending={signingOut}
-              className="text-ink-100 hover:bg-ink-800 hover:text-white"
             >
               Sign out
             </Button>

@@ -3,7 +3,7 @@ import { Link, type LinkProps } from 'react-router';
 import { cn } from './cn';
 import { Spinner } from './spinner';
 
-type Variant = 'primary' | 'secondary' | 'ghost' | 'danger';
+type Variant = 'primary' | 'secondary' | 'ghost' | 'danger' | 'inverse';
 type Size = 'sm' | 'md';
 
 const base =
@@ -15,6 +15,8 @@ const variants: Record<Variant, string> = {
   secondary: 'border border-ink-200 bg-surface text-ink-800 hover:border-ink-300 hover:bg-ink-50',
   ghost: 'text-ink-700 hover:bg-ink-100',
   danger: 'border border-rust-100 bg-rust-50 text-rust-700 hover:bg-rust-100',
+  /** For dark surfaces such as the header. */
+  inverse: 'border border-ink-600 text-ink-100 hover:border-ink-400 hover:bg-ink-800 hover:text-white',
 };
 
 const sizes: Record<Size, string> = {

@@ -1,6 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { ROLE_LABELS, type Role } from '@shared/schemas/common';
 import { Card, CardBody, CardHeader } from '@/components/ui/card';
+import { cn } from '@/components/ui/cn';
 import { PageHeader } from '@/components/ui/page-header';
 import { QueryError } from '@/components/ui/query-error';
 import { Loading } from '@/components/ui/spinner';
@@ -36,6 +37,8 @@ export default function HomeRoute() {
   const home = useHome();
   const quickLinks = quickLinksForRole(user.role);
   const firstName = user.name.split(/\s+/)[0] || user.name;
+  const hasCounts = home.isSuccess && Object.keys(home.data.counts).length > 0;
+  const hasAside = hasCounts || quickLinks.length > 0;
 
   return (
     <>
@@ -50,7 +53,12 @@ export default function HomeRoute() {
         }
       />
 
-      <div className="grid gap-gutter lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+      <div
+        className={cn(
+          'grid grid-cols-1 items-start gap-gutter',
+          hasAside ? 'lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]' : 'max-w-3xl',
+        )}
+      >
         <Card>
           <CardHeader id="waiting-heading" title="Waiting for you" description="Things that need your attention." />
           <CardBody>
@@ -59,31 +67,31 @@ export default function HomeRoute() {
             ) : home.isError ? (
               <QueryError error={home.error} onRetry={() => void home.refetch()} retrying={home.isFetching} />
             ) : (
-              <div className="flex flex-col gap-5">
-                <WaitingList items={home.data.waiting} />
-              </div>
+              <WaitingList items={home.data.waiting} />
             )}
           </CardBody>
         </Card>
 
-        <div className="flex flex-col gap-gutter">
-          {home.isSuccess && Object.keys(home.data.counts).length > 0 && (
-            <section aria-labelledby="counts-heading">
-              <h2 id="counts-heading" className="mb-3 text-lead font-bold text-ink-900">
-                At a glance
-              </h2>
-              <HomeCounts counts={home.data.counts} />
-            </section>
-          )}
-          {quickLinks.length > 0 && (
-            <section aria-labelledby="quick-links-heading">
-              <h2 id="quick-links-heading" className="mb-3 text-lead font-bold text-ink-900">
-                Go to
-              </h2>
-              <QuickLinks items={quickLinks} />
-            </section>
-          )}
-        </div>
+        {hasAside && (
+          <div className="flex flex-col gap-gutter">
+            {hasCounts && (
+              <section aria-labelledby="counts-heading">
+                <h2 id="counts-heading" className="mb-3 text-lead font-bold text-ink-900">
+                  At a glance
+                </h2>
+                <HomeCounts counts={home.data.counts} />
+              </section>
+            )}
+            {quickLinks.length > 0 && (
+              <section aria-labelledby="quick-links-heading">
+                <h2 id="quick-links-heading" className="mb-3 text-lead font-bold text-ink-900">
+                  Go to
+                </h2>
+                <QuickLinks items={quickLinks} />
+              </section>
+            )}
+          </div>
+        )}
       </div>
     </>
   );

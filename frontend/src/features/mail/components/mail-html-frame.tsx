@@ -13,7 +13,7 @@ export function MailHtmlFrame({ html, title }: { html: string; title: string }) 
       srcDoc={document}
       sandbox="allow-popups allow-top-navigation-by-user-activation"
       referrerPolicy="no-referrer"
-      className="h-[32rem] w-full rounded-control border border-ink-100 bg-white"
+      className="h-[26rem] w-full rounded-control border border-ink-100 bg-white"
     />
   );
 }

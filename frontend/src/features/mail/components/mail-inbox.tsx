@@ -19,7 +19,7 @@ export function MailInbox({ messages }: { messages: MailMessage[] }) {
   const selected = messages.find((message) => message.id === selectedId) ?? messages[0]!;
 
   return (
-    <div className="grid gap-gutter lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+    <div className="grid grid-cols-1 items-start gap-gutter lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
       <ul aria-label="Messages, newest first" className="flex flex-col gap-2">
         {messages.map((message) => {
           const active = message.id === selected.id;

@@ -24,7 +24,7 @@ function InvitationRow({ invitation }: { invitation: Invitation }) {
   const revoke = useRevokeInvitation();
   return (
     <li className="py-3 first:pt-0 last:pb-0">
-      <div className="flex flex-wrap items-start justify-between gap-3">
+      <div className="grid grid-cols-[minmax(0,1fr)_auto] items-start gap-3">
         <div className="min-w-0">
           <p className="font-bold text-ink-900">
             {invitation.name} <span className="font-semibold text-ink-500">· {ROLE_LABELS[invitation.role]}</span>

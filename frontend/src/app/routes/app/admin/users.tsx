@@ -36,7 +36,7 @@ export default function AdminUsersRoute() {
         description={`Who works in ${me.workspace.name}, and in which role. Disabled members cannot sign in; their work stays.`}
       />
 
-      <div className="grid gap-gutter xl:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+      <div className="grid grid-cols-1 items-start gap-gutter xl:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <Card>
           <CardHeader
             title="Members"
