@@ -36,7 +36,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
   return [
     {
       id: 'root',
-      errorElement: <RouteError />,
+      errorElement: <RouteError bare />,
       hydrateFallbackElement: <AppSplash />,
       children: [
         // Public pages: no session needed.

@@ -97,6 +97,9 @@ const FALLBACK_MESSAGES: Record<number, string> = {
   409: 'Someone else changed this record. Reload and try again.',
   413: 'That upload is too large.',
   429: 'Too many attempts. Wait a moment and try again.',
+  502: 'Packwright’s server is not answering right now. Try again in a moment.',
+  503: 'Packwright’s server is not answering right now. Try again in a moment.',
+  504: 'Packwright’s server took too long to answer. Try again in a moment.',
 };
 
 async function request<S extends z.ZodType | undefined>(

@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { isRouteErrorResponse, useRouteError } from 'react-router';
 import type { Role } from '@shared/schemas/common';
 import { ROLES } from '@shared/schemas/common';
+import { Wordmark } from '@/components/brand/logo-mark';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { errorMessage, isApiError } from '@/lib/api-client';
 import { ForbiddenMessage } from './forbidden-message';
@@ -27,8 +28,9 @@ function isChunkLoadError(error: unknown): boolean {
 }
 
 /** The route errorElement: friendly words for 404, 403 and anything unexpected. */
-export function RouteError() {
+export function RouteError({ bare = false }: { bare?: boolean }) {
   const error = useRouteError();
+  const Frame = bare ? BareFrame : InlineFrame;
 
   if (isRouteErrorResponse(error)) {
     if (error.status === 404) return <Frame><NotFoundMessage /></Frame>;
@@ -60,13 +62,25 @@ export function RouteError() {
         }
       >
         <p>Reload to try again. If it keeps happening, tell your administrator what you were doing when it appeared.</p>
-        <p className="mt-3 rounded-control bg-ink-50 px-3 py-2 font-mono text-small text-ink-600">{detail}</p>
+        <p className="mt-3 rounded-control bg-ink-100/60 px-3 py-2 text-small text-ink-700">{detail}</p>
       </StatusPage>
     </Frame>
   );
 }
 
-/** Keeps the message readable whether it renders inside the app layout or on a bare page. */
-function Frame({ children }: { children: ReactNode }) {
+/** Inside the app layout: the header and navigation are already there. */
+function InlineFrame({ children }: { children: ReactNode }) {
   return <div className="px-gutter">{children}</div>;
+}
+
+/** Outside any layout (the session check itself failed): a page of its own. */
+function BareFrame({ children }: { children: ReactNode }) {
+  return (
+    <div className="min-h-dvh">
+      <header className="bg-ink-900 px-gutter py-3">
+        <Wordmark />
+      </header>
+      <main className="px-gutter py-section">{children}</main>
+    </div>
+  );
 }
