@@ -6,6 +6,10 @@ import { invitationsRouter } from './invitations/invitations.router';
 import { mailRouter } from './mail/mail.router';
 import { buildOpenApiDocument } from './openapi/registry';
 import { usersRouter } from './users/users.router';
+import { speciesRouter } from './species/species.router';
+import { ingredientsRouter } from './ingredients/ingredients.router';
+import { attachmentsRouter } from './attachments/attachments.router';
+import { thermoRouter } from './thermo/thermo.router';
 
 /** Every API module mounts here; each router checks its own session and role rules. */
 export const apiRouter = Router();
@@ -15,6 +19,10 @@ apiRouter.use('/home', homeRouter);
 apiRouter.use('/users', usersRouter);
 apiRouter.use('/invitations', invitationsRouter);
 apiRouter.use('/mail-messages', mailRouter);
+apiRouter.use('/species', speciesRouter);
+apiRouter.use('/ingredients', ingredientsRouter);
+apiRouter.use('/attachments', attachmentsRouter);
+apiRouter.use('/thermo', thermoRouter);
 
 let openApiDocument: ReturnType<typeof buildOpenApiDocument> | null = null;
 apiRouter.get('/openapi.json', (_req, res) => {

@@ -3,3 +3,5 @@ export * from './auth';
 export * from './users';
 export * from './mail';
 export * from './health';
+export * from './library';
+export * from './thermo';
