@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
 import { ROLES, ROLE_LABELS, roleSchema, type Role } from '@shared/schemas/common';
 import type { User } from '@shared/schemas/users';
@@ -15,7 +16,7 @@ export function UsersTable({ users, currentUserId }: { users: User[]; currentUse
   const sorted = [...users].sort((a, b) => Number(a.disabled) - Number(b.disabled) || a.name.localeCompare(b.name));
   return (
     <div className="-mx-5 overflow-x-auto">
-      <table className="w-full min-w-[44rem] text-left text-small">
+      <table className="w-full min-w-[50rem] text-left text-small">
         <caption className="sr-only">Workspace members</caption>
         <thead className="border-b border-ink-100 text-caption font-bold tracking-wide text-ink-500 uppercase">
           <tr>
@@ -42,13 +43,21 @@ function UserRow({ user, isSelf }: { user: User; isSelf: boolean }) {
   const queryClient = useQueryClient();
   const update = useUpdateUser();
   const stale = isApiError(update.error) && update.error.status === 409;
-  const pendingRole = update.isPending ? update.variables.role : undefined;
+  // A role is chosen first and saved on purpose, so browsing the options never sends a change.
+  const [draftRole, setDraftRole] = useState<Role | null>(null);
+  const roleChanged = draftRole !== null && draftRole !== user.role;
+  const savingRole = update.isPending && update.variables.role !== undefined;
   const pendingDisabled = update.isPending ? update.variables.disabled : undefined;
 
-  const change = (patch: { role?: Role; disabled?: boolean }) => update.mutate({ id: user.id, version: user.version, ...patch });
+  const change = (patch: { role?: Role; disabled?: boolean }) =>
+    update.mutate(
+      { id: user.id, version: user.version, ...patch },
+      { onSuccess: () => setDraftRole(null) },
+    );
 
   const reload = async () => {
     await queryClient.invalidateQueries({ queryKey: usersKeys.all });
+    setDraftRole(null);
     update.reset();
   };
 
@@ -63,25 +72,37 @@ function UserRow({ user, isSelf }: { user: User; isSelf: boolean }) {
           <p className="break-all text-ink-600">{user.email}</p>
         </td>
         <td className="px-3 py-3">
-          <SelectField
-            label={`Role of ${user.name}`}
-            hideLabel
-            controlSize="sm"
-            containerClassName="w-48"
-            value={pendingRole ?? user.role}
-            disabled={isSelf || update.isPending}
-            title={isSelf ? 'You cannot change your own role.' : undefined}
-            onChange={(event) => {
-              const parsed = roleSchema.safeParse(event.target.value);
-              if (parsed.success && parsed.data !== user.role) change({ role: parsed.data });
-            }}
-          >
-            {ROLES.map((role) => (
-              <option key={role} value={role}>
-                {ROLE_LABELS[role]}
-              </option>
-            ))}
-          </SelectField>
+          <div className="flex flex-wrap items-center gap-2">
+            <SelectField
+              label={`Role of ${user.name}`}
+              hideLabel
+              controlSize="sm"
+              containerClassName="w-48"
+              value={draftRole ?? user.role}
+              disabled={isSelf || update.isPending}
+              title={isSelf ? 'You cannot change your own role.' : undefined}
+              onChange={(event) => {
+                const parsed = roleSchema.safeParse(event.target.value);
+                if (parsed.success) setDraftRole(parsed.data);
+              }}
+            >
+              {ROLES.map((role) => (
+                <option key={role} value={role}>
+                  {ROLE_LABELS[role]}
+                </option>
+              ))}
+            </SelectField>
+            {roleChanged && (
+              <>
+                <Button size="sm" pending={savingRole} disabled={update.isPending} onClick={() => change({ role: draftRole })}>
+                  Save<span className="sr-only"> the role of {user.name}</span>
+                </Button>
+                <Button size="sm" variant="ghost" disabled={update.isPending} onClick={() => setDraftRole(null)}>
+                  Cancel
+                </Button>
+              </>
+            )}
+          </div>
         </td>
         <td className="px-3 py-3">
           {(pendingDisabled ?? user.disabled) ? <Badge tone="danger">Disabled</Badge> : <Badge tone="success">Active</Badge>}
@@ -94,7 +115,7 @@ function UserRow({ user, isSelf }: { user: User; isSelf: boolean }) {
             <Button
               size="sm"
               variant={user.disabled ? 'secondary' : 'danger'}
-              pending={update.isPending && pendingDisabled !== undefined}
+              pending={pendingDisabled !== undefined}
               disabled={update.isPending}
               onClick={() => change({ disabled: !user.disabled })}
             >
