@@ -28,7 +28,7 @@ export function waterHeatCapacity_J_per_gK(tempC: number): number {
  * equals J/(g·K). Source: Laliberté, J. Chem. Eng. Data 54 (2009) 1725, doi:10.1021/je8008123
  * (the same form is used by the CalebBell/chemicals `Laliberte_heat_capacity_i`).
  *
- * @example soluteApparentHeatCapacity_J_per_gK(naclCoefficients, 25, 0.9) // ≈ −0.9
+ * @example soluteApparentHeatCapacity_J_per_gK(naclCoefficients, 25, 0.9) // ≈ −0.31
  */
 export function soluteApparentHeatCapacity_J_per_gK(c: SolutionHeatCapacityCoefficients, tempC: number, waterMassFraction: number): number {
   const x = 1 - waterMassFraction;
