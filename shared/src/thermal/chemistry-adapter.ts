@@ -192,3 +192,11 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
   };
   return port;
 }
+
+let shared: ChemistryPort | null = null;
+
+/** One port over the bundled chemistry library, built on first use and shared (its curve caches are reused). */
+export function defaultChemistryPort(): ChemistryPort {
+  shared ??= chemistryPort();
+  return shared;
+}

@@ -94,7 +94,6 @@ export const TIME_PROFILE_DEFAULTS = {
  * end-state temperature (about 2.6 °C) and stays there.
  */
 export function simulateTimeProfile(port: ChemistryPort, input: TimeProfileInput): TimeProfileResult {
-  validate(input);
   const model = new PackModel(port, input.components, {
     packHeatCapacityJPerK: input.packHeatCapacityJPerK ?? 0,
     ...(input.packAreaM2 !== undefined ? { packAreaM2: input.packAreaM2 } : {}),
@@ -102,7 +101,7 @@ export function simulateTimeProfile(port: ChemistryPort, input: TimeProfileInput
   return simulateModel(model, input);
 }
 
-function validate(input: TimeProfileInput): void {
+function validate(input: Omit<TimeProfileInput, 'components'>): void {
   const finite = (v: number, field: string) => {
     if (!Number.isFinite(v)) throw new ThermalModelError(`expected a finite number for ${field}, found ${v}`, { field });
   };
@@ -122,7 +121,8 @@ function validate(input: TimeProfileInput): void {
   }
 }
 
-export function simulateModel(model: PackModel, input: TimeProfileInput): TimeProfileResult {
+export function simulateModel(model: PackModel, input: Omit<TimeProfileInput, 'components' | 'packHeatCapacityJPerK' | 'packAreaM2'>): TimeProfileResult {
+  validate(input);
   const n = model.size;
   const ua = input.uaWPerK;
   const tEnv = input.envTempC;
@@ -231,7 +231,7 @@ const SUBSTEPS = 8;
 
 function analyseCurve(
   sol: OdeSolution,
-  input: TimeProfileInput,
+  input: Omit<TimeProfileInput, 'components'>,
 ): { curve: CurvePoint[]; minC: number; maxC: number; timeToTargetMin: number | null; minutesInBand: number | null } {
   const tEnd = sol.t.at(-1)!;
   const stepMin = input.curveStepMin ?? Math.max(0.05, input.holdMin / 80);
