@@ -1,2 +1,3 @@
 // Each feature's demo seed registers itself with registerSeedStep() when imported here.
 export {};
+import '../ingredients/ingredients.seed';
