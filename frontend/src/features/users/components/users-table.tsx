@@ -72,7 +72,7 @@ function UserRow({ user, isSelf }: { user: User; isSelf: boolean }) {
           <p className="break-all text-ink-600">{user.email}</p>
         </td>
         <td className="px-3 py-3">
-          <div className="flex flex-wrap items-center gap-2">
+          <div className="flex items-center gap-2">
             <SelectField
               label={`Role of ${user.name}`}
               hideLabel
