@@ -31,7 +31,7 @@ export interface EnergyBreakdown {
   heatStoredJ: number;
   heatLostJ: number;
   balanceErrorJ: number;
-  /** |balanceErrorJ| divided by the largest of |released|, |stored|, |lost| (0 when all are 0). */
+  /** |balanceErrorJ| divided by the largest of |released|, |stored|, |lost| and 1 mJ (a floor for empty packs). */
   relativeBalanceError: number;
 }
 
@@ -57,7 +57,7 @@ export function energyBreakdown(
   const released = processes.reduce((a, p) => a + p.heatReleasedJ, 0);
   const stored = sensible.reduce((a, s) => a + s.heatStoredJ, 0) + heatCapacityChangeJ;
   const balance = released - stored - heatLostJ;
-  const scale = Math.max(Math.abs(released), Math.abs(stored), Math.abs(heatLostJ));
+  const scale = Math.max(Math.abs(released), Math.abs(stored), Math.abs(heatLostJ), 1e-3);
   return {
     processes,
     sensible,
@@ -66,6 +66,6 @@ export function energyBreakdown(
     heatStoredJ: stored,
     heatLostJ,
     balanceErrorJ: balance,
-    relativeBalanceError: scale > 0 ? Math.abs(balance) / scale : 0,
+    relativeBalanceError: Math.abs(balance) / scale,
   };
 }
