@@ -23,12 +23,17 @@ registerWaitingProvider(['admin'], async (user) => {
     items: pending.map((inv) => ({
       kind: 'invitation',
       title: `Invitation to ${inv.name} (${inv.role}) not yet accepted`,
-      detail: `Sent to ${inv.email}; the link expires ${inv.expiresAt.toISOString()}.`,
+      detail: `Sent to ${inv.email}; the link expires in ${hoursLeft(inv.expiresAt)}.`,
       href: '/admin/users',
     })),
     counts: { pendingInvitations: pending.length },
   };
 });
+
+function hoursLeft(when: Date): string {
+  const hours = Math.max(0, Math.round((when.getTime() - Date.now()) / 3600_000));
+  return hours === 1 ? '1 hour' : `${hours} hours`;
+}
 
 export async function homeFor(user: AuthUser): Promise<HomeResponse> {
   const results = await Promise.all(providers.filter((p) => p.roles.includes(user.role)).map((p) => p.provide(user)));
