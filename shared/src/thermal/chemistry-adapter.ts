@@ -15,6 +15,7 @@ import {
   type SpeciesRecord,
 } from '../chemistry';
 import type { ChemistryPort, EutecticPoint, PortValue } from './chemistry-port';
+import { WATER_CP_J_PER_GK } from './constants';
 
 const NO_WARNINGS: ComputationWarning[] = [];
 const FREEZING_W_MAX = 0.6;
@@ -178,6 +179,10 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
             ]
           : NO_WARNINGS;
       return { value, warnings };
+    },
+    solutionCp_J_per_gK(key, w, tempC): PortValue {
+      const app = port.apparentSoluteCp_J_per_gK(key, w, tempC);
+      return { value: (1 - w) * WATER_CP_J_PER_GK + w * app.value, warnings: app.warnings };
     },
     freezingPointDepression_K(key, molality) {
       const c = freezingCurve(key);

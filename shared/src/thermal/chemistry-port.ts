@@ -44,6 +44,12 @@ export interface ChemistryPort {
    * in the mass fraction (clamp to the fitted range rather than switch formulas).
    */
   apparentSoluteCp_J_per_gK(soluteKey: string, totalSoluteMassFraction: number, tempC: number): PortValue;
+  /**
+   * Specific heat capacity of a binary solution of the solute, J/(g·K):
+   * (1 − w)·cp_w + w·cp_app(w), cp_w = WATER_CP_J_PER_GK (constants.ts), so that
+   * (cp − (1 − w)·cp_w)/w returns the apparent value exactly.
+   */
+  solutionCp_J_per_gK(soluteKey: string, massFraction: number, tempC: number): PortValue;
   /** Freezing-point depression of a binary solution, K (positive), or null when not tabulated. */
   freezingPointDepression_K?(soluteKey: string, molality_mol_per_kg: number): number | null;
   /** The solute–water eutectic, or null when not known. */

@@ -1,4 +1,4 @@
-import { solveODE } from 'mathjs';
+import * as math from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { hermiteAt, integrateDormandPrince } from './rk45';
 
@@ -12,7 +12,9 @@ describe('integrateDormandPrince', () => {
   it('agrees with mathjs solveODE (same Dormand–Prince tableau) on a coupled linear system', () => {
     // Reference library: mathjs 15 solveODE, RK45 with a tight tolerance.
     const f = (_t: number, y: readonly number[]) => [-(y[0]! - 20) * 0.01 + 0.5 * (y[1]! - 0.5) * 0.02, 0.02 * (0.5 - y[1]!)];
-    const ref = solveODE((t: number, y: number[]) => f(t, y), [0, 300], [25, 0], { tol: 1e-10, maxIter: 1e6 }) as unknown as { y: number[][] };
+    // mathjs 15 ships solveODE without a type declaration; narrow it here.
+    const solveODE = (math as unknown as { solveODE: (f: (t: number, y: number[]) => number[], span: number[], y0: number[], o: object) => { y: number[][] } }).solveODE;
+    const ref = solveODE((t, y) => f(t, y), [0, 300], [25, 0], { tol: 1e-10, maxIter: 1e6 });
     const mine = integrateDormandPrince((t, y, dy) => { const d = f(t, y); dy[0] = d[0]!; dy[1] = d[1]!; }, 0, 300, [25, 0], { rtol: 1e-10, atol: 1e-12 });
     const refEnd = ref.y.at(-1)!;
     expect(mine.y.at(-1)![0]!).toBeCloseTo(refEnd[0]!, 6);

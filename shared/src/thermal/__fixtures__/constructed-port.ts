@@ -1,4 +1,5 @@
 import type { ChemistryPort, EutecticPoint } from '../chemistry-port';
+import { WATER_CP_J_PER_GK } from '../constants';
 
 /**
  * A small, smooth, made-up chemistry for unit tests of the thermal model's logic (not data):
@@ -40,6 +41,7 @@ export function constructedPort(solutes: Record<string, ConstructedSolute>, extr
       return { value: Math.max(0, s.solubilityAt0_gPer100g + s.solubilitySlope_gPer100gK * t), warnings: [] };
     },
     apparentSoluteCp_J_per_gK: (key) => ({ value: get(key).cpApp_J_per_gK, warnings: [] }),
+    solutionCp_J_per_gK: (key, w) => ({ value: (1 - w) * WATER_CP_J_PER_GK + w * get(key).cpApp_J_per_gK, warnings: [] }),
     eutectic: (key) => solutes[key]?.eutectic ?? null,
   };
 }
