@@ -10,6 +10,7 @@ import { speciesRouter } from './species/species.router';
 import { ingredientsRouter } from './ingredients/ingredients.router';
 import { attachmentsRouter } from './attachments/attachments.router';
 import { thermoRouter } from './thermo/thermo.router';
+import { mixturesRouter } from './mixtures/mixtures.router';
 
 /** Every API module mounts here; each router checks its own session and role rules. */
 export const apiRouter = Router();
@@ -23,6 +24,7 @@ apiRouter.use('/species', speciesRouter);
 apiRouter.use('/ingredients', ingredientsRouter);
 apiRouter.use('/attachments', attachmentsRouter);
 apiRouter.use('/thermo', thermoRouter);
+apiRouter.use('/mixtures', mixturesRouter);
 
 let openApiDocument: ReturnType<typeof buildOpenApiDocument> | null = null;
 apiRouter.get('/openapi.json', (_req, res) => {

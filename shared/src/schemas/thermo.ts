@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { phaseSchema } from './library';
+import { evaluateMixtureResponseSchema } from './mixtures';
 
 // Thermochemistry API: reaction thermodynamics and the chemistry library for instant previews.
 
@@ -50,3 +51,31 @@ export const chemistryLibraryResponseSchema = z.object({
   freezingPoint: z.array(z.record(z.string(), z.unknown())).optional(),
   eutectics: z.array(z.record(z.string(), z.unknown())).optional(),
 });
+
+// ---------------------------------------------------------------------------------------------
+// POST /api/mixtures/evaluate: the shared evaluation plus what only the library knows.
+
+/** The mixture's material cost from the ingredients' cost per kg, as a decimal string. */
+export const mixtureCostSchema = z.object({
+  amount: z.string(),
+  currency: z.string(),
+  /** False when some component (a bare formula) has no cost in the library. */
+  complete: z.boolean(),
+});
+
+export const evaluatedComponentSchema = z.object({
+  ingredientId: z.number().nullable(),
+  formula: z.string().nullable(),
+  name: z.string(),
+  massG: z.number(),
+  processKind: z.string(),
+});
+
+export const evaluateMixtureApiResponseSchema = evaluateMixtureResponseSchema.extend({
+  /** null when the components' costs are in different currencies (see warnings). */
+  cost: mixtureCostSchema.nullable(),
+  components: z.array(evaluatedComponentSchema),
+  /** Hazard notes of the mixture (filled by the hazard-notes rules; empty until they run here). */
+  hazards: z.array(z.object({ severity: z.string(), text: z.string(), ruleId: z.string(), source: z.string() })),
+});
+export type EvaluateMixtureApiResponse = z.infer<typeof evaluateMixtureApiResponseSchema>;

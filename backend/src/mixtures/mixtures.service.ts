@@ -1,0 +1,158 @@
+import {
+  FormulaError,
+  UnknownSpeciesError,
+  dissolutionProducts,
+  findSpecies,
+  hillFormula,
+  parseFormula,
+  speciesKey,
+  splitHydrate,
+} from '@shared/chemistry';
+import type { ChemistryLibrary, ComputationWarning } from '@shared/chemistry/types';
+import type { EvaluateMixtureApiResponse, FieldError } from '@shared/schemas';
+import type { EvaluateMixtureRequest, ResolvedMixture } from '@shared/schemas/mixtures';
+import { ThermalModelError, chemistryPort, evaluateMixture, type ChemistryPort, type IngredientProcessInput } from '@shared/thermal';
+import { AppError } from '../http/errors';
+import type { AuthUser } from '../auth/session-user';
+import { formatCost, ingredientsByIds } from '../ingredients/ingredients.service';
+import { workspaceChemistryLibrary } from '../species/species.service';
+
+/**
+ * The process of a component given as a bare formula: water (`H2O`) is the solvent; any other
+ * formula is a solid that dissolves (phase `cr` unless the formula carries a phase tag), with a
+ * hydrate's water of crystallisation released into the solution.
+ */
+export function processForFormula(lib: ChemistryLibrary, formula: string): IngredientProcessInput {
+  const parsed = parseFormula(formula);
+  if (hillFormula(parsed) === 'H2O' && (parsed.phase === null || parsed.phase === 'l')) return { kind: 'inert', role: 'water' };
+  const solid = findSpecies(lib, formula, parsed.phase ?? 'cr');
+  if (solid.phase !== 'cr') {
+    throw new UnknownSpeciesError(`A bare formula must be water or a dissolving solid; ${solid.key} is not a solid. Add it as an ingredient with its process.`, { formula, phase: solid.phase });
+  }
+  const { anhydrous, waterCount } = splitHydrate(solid.formula);
+  let soluteKey = solid.key;
+  if (waterCount > 0) {
+    try {
+      soluteKey = findSpecies(lib, anhydrous, 'cr').key;
+    } catch {
+      soluteKey = speciesKey(anhydrous, 'cr');
+    }
+  }
+  let ions = 1;
+  try {
+    ions = Math.max(1, Math.round(dissolutionProducts(lib, soluteKey).products.reduce((n, p) => n + p.nu, 0)));
+  } catch {
+    ions = 1; // a non-electrolyte such as urea
+  }
+  return {
+    kind: 'dissolution',
+    solidKey: solid.key,
+    ...(soluteKey !== solid.key ? { soluteKey } : {}),
+    hydrateWaterPerFormula: waterCount,
+    ionsPerFormulaUnit: Math.min(6, ions),
+  };
+}
+
+// Sampling the chemistry curves for the port costs a few milliseconds per solute; keep the port
+// of the last library each workspace used while its species rows are unchanged.
+const portCache = new Map<number, { stamp: string; port: ChemistryPort }>();
+
+function libraryStamp(lib: ChemistryLibrary): string {
+  return lib.species.map((s) => `${s.key}:${s.dfH_kJ_per_mol}:${s.S_J_per_mol_K}:${s.Cp_J_per_mol_K}:${s.molarMass_g_per_mol}`).join('|');
+}
+
+function portFor(workspaceId: number, lib: ChemistryLibrary): ChemistryPort {
+  const stamp = libraryStamp(lib);
+  const cached = portCache.get(workspaceId);
+  if (cached && cached.stamp === stamp) return cached.port;
+  const port = chemistryPort(lib);
+  portCache.set(workspaceId, { stamp, port });
+  return port;
+}
+
+/** Σ costPerKg × massG / 1000 in exact decimal arithmetic (1e-4 currency units × milligrams). */
+function decimalCost(lines: { costPerKg: string; massG: number }[]): string {
+  let numerator = 0n; // (1e-4 currency units per kg) × mg
+  for (const line of lines) {
+    const [whole = '0', frac = ''] = line.costPerKg.split('.');
+    const units = BigInt(whole) * 10_000n + BigInt((frac + '0000').slice(0, 4));
+    numerator += units * BigInt(Math.round(line.massG * 1000));
+  }
+  // ÷ 1e6 mg per kg, rounded half up, gives 1e-4 currency units.
+  const tenThousandths = (numerator + 500_000n) / 1_000_000n;
+  const whole = tenThousandths / 10_000n;
+  return formatCost(`${whole}.${(tenThousandths % 10_000n).toString().padStart(4, '0')}`);
+}
+
+/**
+ * Resolves each component (an ingredient of the member's workspace, or a bare formula) to its
+ * process and runs the shared mixture evaluation. Unknown ids and formulas answer 400 naming the
+ * component's field; data the model had to go beyond come back as warnings.
+ */
+export async function evaluateMixtureFor(actor: AuthUser, request: EvaluateMixtureRequest): Promise<EvaluateMixtureApiResponse> {
+  const lib = await workspaceChemistryLibrary(actor.workspaceId);
+  const ids = request.components.flatMap((c) => (c.ingredientId === undefined ? [] : [c.ingredientId]));
+  const ingredients = await ingredientsByIds(actor.workspaceId, ids);
+  const fields: FieldError[] = [];
+  const warnings: ComputationWarning[] = [];
+  const costLines: { costPerKg: string; massG: number; currency: string }[] = [];
+  let costComplete = true;
+  const components: ResolvedMixture['components'] = [];
+  const described: EvaluateMixtureApiResponse['components'] = [];
+
+  request.components.forEach((c, k) => {
+    if (c.ingredientId !== undefined) {
+      const ing = ingredients.get(c.ingredientId);
+      if (!ing) {
+        fields.push({ field: `components.${k}.ingredientId`, message: `no ingredient ${c.ingredientId} in this workspace's library` });
+        return;
+      }
+      const process: IngredientProcessInput =
+        ing.process ??
+        (ing.role === 'solvent'
+          ? { kind: 'inert', role: 'water' }
+          : { kind: 'inert', role: ing.role === 'packaging' ? 'packaging' : 'additive', ...(ing.cpJPerGK ? { cp_J_per_gK: ing.cpJPerGK } : {}) });
+      components.push({ key: `${ing.name}${ing.grade ? ` (${ing.grade})` : ''}`, massG: c.massG, process });
+      described.push({ ingredientId: ing.id, formula: null, name: ing.name, massG: c.massG, processKind: process.kind });
+      costLines.push({ costPerKg: ing.costPerKg, massG: c.massG, currency: ing.currency });
+    } else {
+      const formula = c.formula as string;
+      try {
+        const process = processForFormula(lib, formula);
+        components.push({ formula, massG: c.massG, process });
+        described.push({ ingredientId: null, formula, name: formula, massG: c.massG, processKind: process.kind });
+        if (c.massG > 0) costComplete = false;
+      } catch (error) {
+        if (error instanceof UnknownSpeciesError || error instanceof FormulaError) fields.push({ field: `components.${k}.formula`, message: error.message });
+        else throw error;
+      }
+    }
+  });
+  if (fields.length) throw AppError.validation(`Invalid mixture: ${fields.map((f) => `${f.field}: ${f.message}`).join('; ')}`, fields);
+
+  const { components: _ignored, ...conditions } = request;
+  let result;
+  try {
+    result = evaluateMixture(portFor(actor.workspaceId, lib), { ...conditions, components });
+  } catch (error) {
+    if (error instanceof ThermalModelError || error instanceof UnknownSpeciesError) {
+      const path = error instanceof ThermalModelError ? (error.field ?? '') : '';
+      const m = /^components\.(\d+)/.exec(path);
+      const k = m ? Number(m[1]) : -1;
+      const field = k >= 0 && request.components[k] ? `components.${k}.${request.components[k]!.ingredientId !== undefined ? 'ingredientId' : 'formula'}` : path || 'components';
+      throw AppError.validation(error.message, [{ field, message: error.message }]);
+    }
+    throw error;
+  }
+
+  const currencies = new Set(costLines.map((l) => l.currency));
+  let cost: EvaluateMixtureApiResponse['cost'] = null;
+  if (currencies.size > 1) {
+    warnings.push({ code: 'mixed-currencies', message: `The ingredients are costed in ${[...currencies].join(', ')}; no total cost is given.` });
+  } else if (costLines.length > 0) {
+    cost = { amount: decimalCost(costLines), currency: [...currencies][0]!, complete: costComplete };
+  }
+  if (!costComplete) warnings.push({ code: 'cost-incomplete', message: 'Components given as bare formulas have no cost in the library; the cost covers the library ingredients only.' });
+
+  return { ...result, warnings: [...result.warnings, ...warnings], cost, components: described, hazards: [] };
+}
