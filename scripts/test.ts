@@ -1,7 +1,7 @@
 // `npm test`: the same bootstrap as `npm start`, on a throwaway cluster and ports (never .data/),
 // then typecheck, lint, the unit/reference, API and browser suites. PostgreSQL is stopped and the
 // throwaway folder removed at the end, on failure too.
-import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { chmodSync, existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { bin, buildFrontendIfStale, ensureChromium, freePort, root, runStep } from './lib/env';
@@ -11,6 +11,8 @@ const args = process.argv.slice(2);
 const onlyE2e = args.includes('--e2e');
 const vitestArgs = args.filter((a) => a !== '--e2e');
 const scratch = mkdtempSync(path.join(os.tmpdir(), 'packwright-test-'));
+// The postgres user (when we are root) must be able to traverse into the cluster's folder.
+chmodSync(scratch, 0o755);
 let pg: LocalPostgres | null = null;
 let exitCode = 1;
 
@@ -21,6 +23,7 @@ function cleanUp() {
     console.error('[db] stopping PostgreSQL failed:', error);
   }
   rmSync(scratch, { recursive: true, force: true });
+  if (pg && !pg.dataDir.startsWith(scratch)) rmSync(pg.dataDir, { recursive: true, force: true });
 }
 process.on('SIGINT', () => {
   cleanUp();
