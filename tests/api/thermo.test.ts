@@ -205,3 +205,20 @@ describe('POST /api/mixtures/evaluate', () => {
     expect(res.body.warnings.length).toBeGreaterThan(0);
   });
 });
+
+describe('OpenAPI document', () => {
+  it('documents every route of the library and thermochemistry API', async () => {
+    const res = await request(h.app).get('/api/openapi.json');
+    expect(res.status).toBe(200);
+    const paths = res.body.paths as Record<string, Record<string, unknown>>;
+    const expected: [string, string][] = [
+      ['/api/species', 'get'], ['/api/species', 'post'], ['/api/species/{id}', 'patch'],
+      ['/api/thermo/library', 'get'], ['/api/thermo/reaction', 'post'], ['/api/mixtures/evaluate', 'post'],
+      ['/api/ingredients', 'get'], ['/api/ingredients', 'post'], ['/api/ingredients/{id}', 'get'], ['/api/ingredients/{id}', 'patch'],
+      ['/api/ingredients/{id}', 'delete'], ['/api/ingredients/{id}/history', 'get'], ['/api/ingredients/import', 'post'],
+      ['/api/ingredients/export.csv', 'get'], ['/api/ingredients/{id}/attachments', 'post'], ['/api/ingredients/{id}/attachments', 'get'],
+      ['/api/attachments/{id}/download', 'get'],
+    ];
+    for (const [path, method] of expected) expect(paths[path]?.[method], `${method.toUpperCase()} ${path}`).toBeDefined();
+  });
+});
