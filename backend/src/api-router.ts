@@ -11,6 +11,9 @@ import { ingredientsRouter } from './ingredients/ingredients.router';
 import { attachmentsRouter } from './attachments/attachments.router';
 import { thermoRouter } from './thermo/thermo.router';
 import { mixturesRouter } from './mixtures/mixtures.router';
+import { briefsRouter } from './briefs/briefs.router';
+import { runsRouter } from './runs/runs.router';
+import { candidatesRouter } from './candidates/candidates.router';
 
 /** Every API module mounts here; each router checks its own session and role rules. */
 export const apiRouter = Router();
@@ -25,6 +28,9 @@ apiRouter.use('/ingredients', ingredientsRouter);
 apiRouter.use('/attachments', attachmentsRouter);
 apiRouter.use('/thermo', thermoRouter);
 apiRouter.use('/mixtures', mixturesRouter);
+apiRouter.use('/briefs', briefsRouter);
+apiRouter.use('/runs', runsRouter);
+apiRouter.use('/candidates', candidatesRouter);
 
 let openApiDocument: ReturnType<typeof buildOpenApiDocument> | null = null;
 apiRouter.get('/openapi.json', (_req, res) => {

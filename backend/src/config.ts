@@ -24,6 +24,10 @@ const envSchema = z.object({
   LOGIN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
   LOGIN_RATE_WINDOW_MS: z.coerce.number().int().positive().default(15 * 60 * 1000),
   WORKER_ENABLED: z.enum(['true', 'false']).default('true'),
+  RUN_EXPIRE_SECONDS: z.coerce.number().int().min(1).default(600),
+  RUN_RETRY_LIMIT: z.coerce.number().int().min(0).max(10).default(2),
+  RUN_POLLING_SECONDS: z.coerce.number().min(0.5).default(1),
+  RUN_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(30),
 });
 
 export type AppConfig = ReturnType<typeof loadConfig>;
@@ -69,6 +73,13 @@ function loadConfig() {
     },
     loginRateLimit: { limit: env.LOGIN_RATE_LIMIT, windowMs: env.LOGIN_RATE_WINDOW_MS },
     workerEnabled: env.WORKER_ENABLED === 'true',
+    runs: {
+      /** A job not finished in this time is taken as lost (its worker died) and retried. */
+      expireSeconds: env.RUN_EXPIRE_SECONDS,
+      retryLimit: env.RUN_RETRY_LIMIT,
+      pollingSeconds: env.RUN_POLLING_SECONDS,
+      maintenanceSeconds: env.RUN_MAINTENANCE_SECONDS,
+    },
   };
 }
 

@@ -8,6 +8,8 @@ import { seedDemo } from './db/seed';
 import { sequelize } from './db/sequelize';
 import { closeMailer, useMailSink } from './mail/mailer';
 import { startMailSink, type MailSink } from './mail/mail-sink';
+import { executeRun } from './runs/run-executor';
+import { startRunWorker, stopRunQueue } from './runs/run-queue';
 
 export interface RunningServer {
   url: string;
@@ -20,6 +22,8 @@ export interface StartOptions extends AppOptions {
   port?: number;
   migrate?: boolean;
   seed?: boolean;
+  /** Serve the optimisation queue in this process (default: WORKER_ENABLED, true). */
+  worker?: boolean;
 }
 
 /** Starts the whole back end: migrations, demo seed, the local mail sink, and the HTTP server on loopback. */
@@ -36,6 +40,8 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
     sink = await startMailSink(config.mail.sinkPort);
     useMailSink(sink.port);
   }
+
+  if (options.worker ?? config.workerEnabled) await startRunWorker(({ runId }) => executeRun(runId));
 
   const app = createApp(options);
   const server: Server = await new Promise((resolve, reject) => {
@@ -54,6 +60,7 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
       server.closeAllConnections?.();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await sink?.close();
+      await stopRunQueue();
       closeMailer();
       await sequelize.close();
     },

@@ -1,0 +1,14 @@
+import type { Brief, OptimisationResult } from '@shared/schemas/briefs';
+import type { ChemistryLibrary } from '@shared/chemistry/types';
+import type { OptimiserIngredient } from '@shared/optimiser/types';
+
+export interface OptimiseThreadInput {
+  brief: Brief;
+  ingredients: OptimiserIngredient[];
+  chemistry: ChemistryLibrary;
+}
+
+export type OptimiseThreadMessage =
+  | { type: 'progress'; done: number; total: number }
+  | { type: 'result'; result: OptimisationResult & { sweep?: unknown }; elapsedMs: number }
+  | { type: 'error'; message: string };
