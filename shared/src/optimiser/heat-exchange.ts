@@ -1,0 +1,24 @@
+import type { Brief } from '../schemas/briefs';
+import { contactUA } from '../thermal/contact';
+
+export interface HeatExchange {
+  /** Overall conductance to the surroundings, W/K. */
+  uaWPerK: number;
+  /** Temperature the pack exchanges heat with, °C (for skin contact, the UA-weighted mean of skin and ambient). */
+  envTempC: number;
+}
+
+/**
+ * UA and exchange temperature of a brief: the brief's `uaWPerK` with its ambient temperature
+ * when given, else the thermal model's contact case (thermal/contact.ts: convection plus
+ * linearised radiation in still air; fabric and tissue in series to the skin on one face;
+ * insulation in series) over the brief's `packAreaM2`. The linear model and the verification
+ * use the same figures.
+ *
+ * @example resolveHeatExchange({ uaWPerK: null, contact: 'still-air', packAreaM2: 0.03, ambientC: 25 }).uaWPerK // ≈ 0.28
+ */
+export function resolveHeatExchange(brief: Pick<Brief, 'uaWPerK' | 'contact' | 'packAreaM2' | 'ambientC'>): HeatExchange {
+  if (brief.uaWPerK !== null && brief.uaWPerK !== undefined) return { uaWPerK: brief.uaWPerK, envTempC: brief.ambientC };
+  const c = contactUA({ case: brief.contact, geometry: { areaM2: brief.packAreaM2 } }, brief.ambientC);
+  return { uaWPerK: c.uaWPerK, envTempC: c.envTempC };
+}

@@ -1,0 +1,327 @@
+import type { ChemistryLibrary } from '../chemistry/types';
+import {
+  briefSchema,
+  type Brief,
+  type BriefInput,
+  type Candidate,
+  type ConcentrationCap,
+  type InfeasibleSet,
+  type OptimisationResult,
+  type Verification,
+} from '../schemas/briefs';
+import { chemistryPort } from '../thermal/chemistry-adapter';
+import type { ChemistryPort } from '../thermal/chemistry-port';
+import { REFERENCE_TEMP_C } from '../thermal/constants';
+import { diagnoseInfeasible } from './diagnose-infeasible';
+import { enumerateSets } from './enumerate-sets';
+import { fastPort } from './fast-port';
+import { solveSetIterated, saturationEstimate, type EnthalpyIterationOptions, type IteratedSet } from './iterate-enthalpy';
+import {
+  ingredientCoefficients,
+  objectiveValue,
+  parseIngredient,
+  rowValue,
+  thermalContext,
+  usefulHeatJPerG,
+  type LinearModel,
+  type ParsedIngredient,
+  type ThermalContext,
+} from './linear-model';
+import { orderByObjective, paretoFlags, rankCandidates, type RankItem } from './rank';
+import { sensitivityOf } from './sensitivity';
+import type { LpCounter } from './solve-set';
+import type { OptimiserIngredient, OptimiserWarning } from './types';
+import { verifyComposition } from './verify';
+
+export interface RunOptimisationInput {
+  /** A brief (parsed, or as written: it is parsed with briefSchema, defaults applied). */
+  brief: Brief | BriefInput;
+  ingredients: readonly OptimiserIngredient[];
+  /** Species data; ignored when `options.port` is given. */
+  chemistry: ChemistryLibrary;
+}
+
+export interface RunOptimisationOptions {
+  /** Called after each set and each verification with (done, total). */
+  onProgress?: (done: number, total: number) => void;
+  /** Checked before each set and each verification; true stops the run (status `cancelled`, partial results). */
+  isCancelled?: () => boolean;
+  /** How many of the best candidates to verify with the time model (default 20). */
+  verifyTop?: number;
+  /** Concentration caps from outside the brief (the hazards module). */
+  extraCaps?: readonly ConcentrationCap[];
+  /** A chemistry port to reuse across runs (its sampled curves are cached); default one built over `chemistry`. */
+  port?: ChemistryPort;
+  /** Diagnose every infeasible set (default true). */
+  diagnose?: boolean;
+  /** Sensitivity of the verified candidates' binding constraints (default true). */
+  sensitivity?: boolean;
+  iteration?: EnthalpyIterationOptions;
+  /** Integrator tolerance of the verification (default 1e-5). */
+  verifyRtol?: number;
+}
+
+/** The optimisation result plus what tests and the benchmark look at. */
+export interface RunOptimisationOutput extends OptimisationResult {
+  /** Final LP of every set solved (feasible or not), in enumeration order. */
+  solvedSets: IteratedSet[];
+}
+
+interface Working extends RankItem {
+  iterated: IteratedSet;
+  candidate: Candidate;
+  effectiveKey: string;
+}
+
+/**
+ * The whole optimisation of a brief, as a pure function:
+ * 1. parse the brief, build the thermal context (UA, exchange temperature, limits);
+ * 2. leave out actives that cannot help (heat the wrong way at the target, or a melt whose
+ *    melting point is below a warm target), then enumerate 1…maxActives sets
+ *    (enumerate-sets.ts);
+ * 3. solve each set's LP with the enthalpy-of-solution iteration (iterate-enthalpy.ts);
+ *    diagnose the infeasible ones (diagnose-infeasible.ts);
+ * 4. drop a candidate whose composition is that of a simpler set (an active at 0 g): ties go
+ *    to the simpler mixture;
+ * 5. order by the objective, verify the best `verifyTop` with the time model (verify.ts), then
+ *    rank: passed, not verified, missed, failed; objective; simpler first (rank.ts); flag the
+ *    Pareto front; sensitivity of the verified candidates' binding constraints.
+ * Progress is reported through `onProgress(done, total)`, total = sets + verifications;
+ * `isCancelled()` is polled between steps.
+ */
+export function runOptimisation(input: RunOptimisationInput, options: RunOptimisationOptions = {}): RunOptimisationOutput {
+  const brief: Brief = briefSchema.parse(input.brief);
+  const port = options.port ?? fastPort(chemistryPort(input.chemistry), input.chemistry);
+  const ctx = thermalContext(brief, options.extraCaps ?? []);
+  const verifyTop = Math.max(0, options.verifyTop ?? 20);
+  const counter: LpCounter = { count: 0 };
+  const warnings = new Map<string, OptimiserWarning>();
+  const addWarnings = (ws: readonly OptimiserWarning[], subject: string) => {
+    for (const w of ws) {
+      const id = `${w.code}|${subject}`;
+      if (!warnings.has(id)) warnings.set(id, { code: w.code, message: `${subject}: ${w.message}` });
+    }
+  };
+
+  const parsed = new Map<string, ParsedIngredient>();
+  const parseErrors = new Map<string, string>();
+  for (const i of input.ingredients) {
+    try {
+      parsed.set(i.id, parseIngredient(port, i, brief.packAreaM2));
+    } catch (e) {
+      parseErrors.set(i.id, (e as Error).message);
+    }
+  }
+  const enumeration = enumerateSets(brief, input.ingredients, (i) => {
+    const err = parseErrors.get(i.id);
+    if (err) return `cannot be modelled: ${err}`;
+    for (const n of i.needs ?? []) if (parseErrors.has(n.ingredientId)) return `needs ${n.ingredientId}, which cannot be modelled`;
+    return uselessReason(parsed.get(i.id)!, ctx, port);
+  });
+
+  const sets = enumeration.sets;
+  const total = sets.length + Math.min(verifyTop, sets.length);
+  let done = 0;
+  let cancelled = false;
+  const solvedSets: IteratedSet[] = [];
+  const infeasible: InfeasibleSet[] = [];
+  const working: Working[] = [];
+  let unsettled = 0;
+  for (const set of sets) {
+    if (options.isCancelled?.()) {
+      cancelled = true;
+      break;
+    }
+    const members = set.members.map((m) => parsed.get(m.id)!);
+    const it = solveSetIterated(set, members, ctx, port, options.iteration, counter);
+    solvedSets.push(it);
+    if (it.solution.status === 'optimal') {
+      if (!it.settled) unsettled++;
+      for (const c of it.model.coefficients) addWarnings(c.warnings, c.ingredient.name);
+      working.push(toWorking(it, ctx));
+    } else if (options.diagnose !== false) {
+      infeasible.push(diagnoseInfeasible(it.model, counter));
+    } else {
+      infeasible.push({ setIds: set.activeIds, setNames: activeNames(it.model), blocking: [], reason: 'infeasible (not diagnosed)' });
+    }
+    done++;
+    options.onProgress?.(done, total);
+  }
+
+  // Ties to the simpler mixture: a set whose optimum leaves an active at 0 g is the simpler set.
+  const seen = new Set<string>();
+  const distinct = orderByObjective(working, brief.objective).filter((w) => {
+    if (seen.has(w.effectiveKey)) return false;
+    seen.add(w.effectiveKey);
+    return true;
+  });
+
+  let verified = 0;
+  for (const w of distinct.slice(0, verifyTop)) {
+    if (cancelled || options.isCancelled?.()) {
+      cancelled = true;
+      break;
+    }
+    const composition = w.iterated.model.coefficients.map((c, i) => ({ ingredient: c.ingredient, massG: w.iterated.solution.massesG[i] ?? 0 }));
+    const v = verifyComposition(port, brief, composition, options.verifyRtol !== undefined ? { rtol: options.verifyRtol } : {});
+    const { profile, ...verification } = v;
+    if (profile) addWarnings(profile.warnings, w.candidate.setNames.join(' + '));
+    applyVerification(w, verification);
+    if (options.sensitivity !== false) {
+      w.candidate.sensitivity = sensitivityOf(w.iterated.model, w.iterated.solution.binding, w.iterated.solution.objectiveValue, counter);
+    }
+    verified++;
+    done++;
+    options.onProgress?.(done, total);
+  }
+
+  const ranked = rankCandidates(distinct, brief.objective);
+  const pareto = paretoFlags(ranked);
+  const candidates = ranked.map((w, i) => ({ ...w.candidate, rank: i + 1, pareto: pareto[i]! }));
+  const excludedIngredients = enumeration.excluded.map((e) => ({ ingredientId: e.ingredientId, name: e.name, reason: e.reason }));
+  const runWarnings = [...warnings.values()];
+  if (unsettled > 0) {
+    runWarnings.push({
+      code: 'optimiser.enthalpy-not-settled',
+      message: `${unsettled} set(s) did not settle in the enthalpy-of-solution iteration; their figures are from the last pass (see each candidate's enthalpyIteration)`,
+    });
+  }
+  return {
+    status: cancelled ? 'cancelled' : 'completed',
+    objective: brief.objective,
+    objectiveUnit: unitOfObjective(ctx),
+    candidates,
+    infeasible,
+    excludedIngredients,
+    stats: {
+      setsEnumerated: sets.length,
+      setsSolved: solvedSets.length,
+      lpsSolved: counter.count,
+      feasibleSets: working.length,
+      verified,
+      unsettledSets: unsettled,
+    },
+    warnings: runWarnings,
+    solvedSets,
+  };
+}
+
+function unitOfObjective(ctx: ThermalContext): string {
+  if (ctx.objective === 'least-cost') return 'currency';
+  if (ctx.objective === 'least-mass') return 'g';
+  return Math.abs(ctx.uaWPerK * (ctx.envTempC - ctx.targetTempC)) > 0 ? 'min' : 'kJ';
+}
+
+/**
+ * Why an active cannot help a brief, or null when it can: its useful heat per gram at the target
+ * ({@link usefulHeatJPerG}, counting its own sensible heat) is not positive at either the
+ * saturated or the infinitely dilute concentration.
+ */
+export function uselessReason(p: ParsedIngredient, ctx: ThermalContext, port: ChemistryPort): string | null {
+  const sat = saturationEstimate([p], ctx.targetTempC);
+  const estimates = [sat ?? { nH2O_per_mol: Infinity, soluteMassFraction: 0 }, { nH2O_per_mol: Infinity, soluteMassFraction: 0 }];
+  let best = -Infinity;
+  let heat = 0;
+  let melting: number | null = null;
+  for (const est of estimates) {
+    const c = ingredientCoefficients(p, ctx.targetTempC, est, port);
+    best = Math.max(best, usefulHeatJPerG(c, ctx, ctx.targetTempC));
+    heat = c.heatAbsorbedJPerG;
+    melting = c.meltingPointC;
+  }
+  if (best > 0) return null;
+  if (melting !== null && ctx.targetTempC >= melting) return `crystallises at ${melting} °C, not above the ${ctx.targetTempC} °C target`;
+  const cold = ctx.packType === 'cold';
+  if (cold ? heat <= 0 : heat >= 0) return cold ? 'releases heat: cannot help a cold pack' : 'absorbs heat: cannot help a warm pack';
+  return `${cold ? 'absorbs' : 'releases'} too little heat to bring even its own mass to ${ctx.targetTempC} °C`;
+}
+
+function activeNames(model: LinearModel): string[] {
+  return model.set.members.filter((m) => model.set.activeIds.includes(m.id)).map((m) => m.name);
+}
+
+function toWorking(it: IteratedSet, ctx: ThermalContext): Working {
+  const m = it.model;
+  const x = it.solution.massesG;
+  const fill = x.reduce((a, b) => a + b, 0);
+  const cost = x.reduce((a, v, i) => a + v * m.coefficients[i]!.costPerG, 0) + ctx.packaging.cost;
+  const heatRow = m.constraints.find((c) => c.id === 'heat-budget')!;
+  const surplus = rowValue(heatRow, x) - heatRow.rhs;
+  // Adiabatic extreme of the linear model: T = T₀ − (Σh·m − Σ(c_f − c_0)(25 − T₀)·m)/(Σc_f·m + C_pack).
+  let h = 0;
+  let k = 0;
+  let cf = ctx.packaging.heatCapacityJPerK;
+  m.coefficients.forEach((c, i) => {
+    h += c.heatAbsorbedJPerG * x[i]!;
+    k += (c.cpFinalJPerGK - c.cpInitialJPerGK) * (REFERENCE_TEMP_C - ctx.initialTempC) * x[i]!;
+    cf += c.cpFinalJPerGK * x[i]!;
+  });
+  const extreme = cf > 0 ? ctx.initialTempC - (h - k) / cf : ctx.initialTempC;
+  const eps = 1e-6 * Math.max(fill, 1e-9);
+  const effectiveActives = m.set.activeIds.filter((id) => (x[m.coefficients.findIndex((c) => c.ingredient.id === id)] ?? 0) > eps);
+  const composition = m.coefficients.map((c, i) => ({ ingredientId: c.ingredient.id, name: c.ingredient.name, role: c.ingredient.role, massG: x[i] ?? 0 }));
+  const ingredientCount = composition.filter((c) => c.massG > eps).length;
+  const predictedHoldMarginMin = m.exchangeJPerMin > 0 ? surplus / m.exchangeJPerMin : null;
+  const binding = it.solution.binding.map((id) => {
+    const row = m.constraints.find((c) => c.id === id)!;
+    return { id, kind: row.kind, label: row.label };
+  });
+  const verification: Verification = {
+    status: 'not-verified',
+    reasons: [],
+    timeToTargetMin: null,
+    minutesInBand: null,
+    minTempC: null,
+    maxTempC: null,
+    endTempC: null,
+    holdMarginMin: null,
+  };
+  const candidate: Candidate = {
+    setIds: m.set.activeIds,
+    setNames: activeNames(m),
+    composition,
+    fillMassG: fill,
+    massG: fill + ctx.packaging.massG,
+    unitCost: cost.toFixed(4),
+    unitCostValue: cost,
+    heatSurplusJ: surplus,
+    predictedHoldMarginMin,
+    predictedExtremeTempC: extreme,
+    predictedMinTempC: null,
+    predictedMaxTempC: null,
+    minutesInBand: null,
+    objectiveValue: objectiveValue(m, x),
+    bindingConstraints: binding,
+    verification,
+    pareto: false,
+    rank: 0,
+    hazardScore: 0,
+    sensitivity: [],
+    enthalpyIteration: { iterations: it.iterations, settled: it.settled, lastRelativeChange: it.lastRelativeChange },
+    warnings: [],
+  };
+  return {
+    key: m.set.key,
+    objectiveValue: candidate.objectiveValue,
+    unitCostValue: cost,
+    massG: candidate.massG,
+    holdMarginMin: predictedHoldMarginMin,
+    hazardScore: 0,
+    verificationStatus: 'not-verified',
+    activeCount: effectiveActives.length,
+    setSize: m.set.activeIds.length,
+    ingredientCount,
+    iterated: it,
+    candidate,
+    effectiveKey: effectiveActives.join('+'),
+  };
+}
+
+function applyVerification(w: Working, v: Verification): void {
+  w.candidate.verification = v;
+  w.verificationStatus = v.status;
+  w.candidate.predictedMinTempC = v.minTempC;
+  w.candidate.predictedMaxTempC = v.maxTempC;
+  w.candidate.minutesInBand = v.minutesInBand;
+  if (v.holdMarginMin !== null) w.holdMarginMin = v.holdMarginMin;
+}
