@@ -23,6 +23,34 @@ const EVERYONE = ROLES;
 export const NAV_ITEMS: readonly NavItem[] = [
   { to: '/', label: 'Home', description: 'What is waiting for you.', roles: EVERYONE, end: true, quickLink: false },
   {
+    to: '/library',
+    label: 'Ingredient library',
+    description: 'Ingredients with their grades, costs, processes, sources and safety data sheets.',
+    roles: EVERYONE,
+    quickLink: true,
+  },
+  {
+    to: '/species',
+    label: 'Species data',
+    description: 'Enthalpies of formation, entropies and heat capacities behind every calculation.',
+    roles: EVERYONE,
+    quickLink: true,
+  },
+  {
+    to: '/bench',
+    label: 'Mixture bench',
+    description: 'Try a mixture and watch its temperature over the hold, as you type.',
+    roles: EVERYONE,
+    quickLink: true,
+  },
+  {
+    to: '/reactions',
+    label: 'Reactions',
+    description: 'ΔH, ΔS and ΔG of a reaction, and where it turns favourable.',
+    roles: EVERYONE,
+    quickLink: true,
+  },
+  {
     to: '/admin/users',
     label: 'People',
     description: 'Invite members, set their roles, disable accounts.',

@@ -1,0 +1,115 @@
+import { evaluateMixtureRequestSchema, type EvaluateMixtureRequest } from '@shared/schemas/mixtures';
+
+export type ExchangeChoice = 'still-air' | 'skin-fabric' | 'insulated' | 'ua';
+
+export type BenchComponentValues = {
+  source: 'ingredient' | 'formula';
+  ingredientId: string;
+  formula: string;
+  massG: string;
+};
+
+/** The bench's fields as typed. */
+export type BenchValues = {
+  components: BenchComponentValues[];
+  initialTempC: string;
+  ambientC: string;
+  exchange: ExchangeChoice;
+  uaWPerK: string;
+  packHeatCapacityJPerK: string;
+  holdMin: string;
+  bandMinC: string;
+  bandMaxC: string;
+};
+
+export const BLANK_COMPONENT: BenchComponentValues = { source: 'ingredient', ingredientId: '', formula: '', massG: '' };
+
+export const DEFAULT_BENCH: BenchValues = {
+  components: [{ ...BLANK_COMPONENT }, { ...BLANK_COMPONENT }],
+  initialTempC: '25',
+  ambientC: '25',
+  exchange: 'still-air',
+  uaWPerK: '0.2',
+  packHeatCapacityJPerK: '0',
+  holdMin: '20',
+  bandMinC: '',
+  bandMaxC: '',
+};
+
+export type BenchErrors = Record<string, string>;
+
+function num(text: string): number | undefined {
+  const trimmed = text.trim().replace(',', '.').replace('−', '-');
+  if (trimmed === '') return undefined;
+  const n = Number(trimmed);
+  return Number.isFinite(n) ? n : Number.NaN;
+}
+
+function isBlank(c: BenchComponentValues): boolean {
+  return (c.source === 'ingredient' ? c.ingredientId === '' : c.formula.trim() === '') && c.massG.trim() === '';
+}
+
+/** The schema's path → the bench field it belongs to. */
+function benchField(path: string, rows: number[]): string {
+  const m = /^components\.(\d+)\.?(.*)$/.exec(path);
+  if (m) {
+    const row = rows[Number(m[1])] ?? Number(m[1]);
+    return `components.${row}.${m[2] || 'massG'}`;
+  }
+  if (path.startsWith('targetBand.minC')) return 'bandMinC';
+  if (path.startsWith('targetBand')) return 'bandMaxC';
+  if (path.startsWith('contact')) return 'exchange';
+  return path || 'components';
+}
+
+/** "initialTempC must be a number (°C)" → "must be a number (°C)", to follow the field's own label. */
+function fragment(message: string): string {
+  return message.replace(/^[A-Za-z][\w.]* (?=must|give)/, '');
+}
+
+/**
+ * Builds the POST /api/mixtures/evaluate request from the bench's fields and checks it with the
+ * schema the server validates with. Blank component rows are left out. `rows[k]` is the bench
+ * row of the request's k-th component, for placing errors.
+ */
+export function benchRequest(values: BenchValues): { request: EvaluateMixtureRequest | null; errors: BenchErrors; rows: number[] } {
+  const rows: number[] = [];
+  const components = values.components.flatMap((c, k) => {
+    if (isBlank(c)) return [];
+    rows.push(k);
+    const massG = num(c.massG);
+    return [
+      c.source === 'ingredient'
+        ? { ingredientId: c.ingredientId === '' ? undefined : Number(c.ingredientId), massG }
+        : { formula: c.formula.trim() === '' ? undefined : c.formula.trim(), massG },
+    ];
+  });
+  const errors: BenchErrors = {};
+  values.components.forEach((c, k) => {
+    if (isBlank(c)) return;
+    if (c.source === 'ingredient' && c.ingredientId === '') errors[`components.${k}.ingredientId`] = 'Choose an ingredient.';
+    if (c.source === 'formula' && c.formula.trim() === '') errors[`components.${k}.formula`] = 'Enter a formula such as NH4NO3.';
+    if (c.massG.trim() === '') errors[`components.${k}.massG`] = 'Enter the mass in g.';
+  });
+  const minC = num(values.bandMinC);
+  const maxC = num(values.bandMaxC);
+  if ((minC === undefined) !== (maxC === undefined)) errors[minC === undefined ? 'bandMinC' : 'bandMaxC'] = 'Give both ends of the band, or neither.';
+  const candidate = {
+    components,
+    initialTempC: num(values.initialTempC),
+    ambientC: num(values.ambientC),
+    ...(values.exchange === 'ua' ? { uaWPerK: num(values.uaWPerK) } : { contact: { case: values.exchange, geometry: {} } }),
+    packHeatCapacityJPerK: num(values.packHeatCapacityJPerK) ?? 0,
+    holdMin: num(values.holdMin),
+    ...(minC !== undefined && maxC !== undefined ? { targetBand: { minC, maxC } } : {}),
+  };
+  const parsed = evaluateMixtureRequestSchema.safeParse(candidate);
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues) {
+      const field = benchField(issue.path.map(String).join('.'), rows);
+      if (!errors[field]) errors[field] = fragment(issue.message);
+    }
+  }
+  if (Object.keys(errors).length > 0 || !parsed.success) return { request: null, errors, rows };
+  return { request: parsed.data, errors, rows };
+}
