@@ -139,7 +139,7 @@ export const DEMO_BRIEFS: readonly BriefInput[] = [
     bandK: 3,
     reachWithinMin: 20,
     holdMin: 120,
-    contact: 'skin-fabric',
+    contact: 'skin-through-fabric',
     packAreaM2: 0.01,
     maxMassG: 80,
     maxUnitCost: '0.80',

@@ -19,6 +19,7 @@ export interface HeatExchange {
  */
 export function resolveHeatExchange(brief: Pick<Brief, 'uaWPerK' | 'contact' | 'packAreaM2' | 'ambientC'>): HeatExchange {
   if (brief.uaWPerK !== null && brief.uaWPerK !== undefined) return { uaWPerK: brief.uaWPerK, envTempC: brief.ambientC };
-  const c = contactUA({ case: brief.contact, geometry: { areaM2: brief.packAreaM2 } }, brief.ambientC);
+  const thermalCase = brief.contact === 'skin-through-fabric' ? 'skin-fabric' : brief.contact;
+  const c = contactUA({ case: thermalCase, geometry: { areaM2: brief.packAreaM2 } }, brief.ambientC);
   return { uaWPerK: c.uaWPerK, envTempC: c.envTempC };
 }

@@ -39,6 +39,10 @@ export interface RunOptimisationInput {
   ingredients: readonly OptimiserIngredient[];
   /** Species data; ignored when `options.port` is given. */
   chemistry: ChemistryLibrary;
+  /** Same as `options.onProgress` (either place works). */
+  onProgress?: (done: number, total: number) => void;
+  /** Same as `options.isCancelled`. */
+  isCancelled?: () => boolean;
 }
 
 export interface RunOptimisationOptions {
@@ -59,12 +63,14 @@ export interface RunOptimisationOptions {
   iteration?: EnthalpyIterationOptions;
   /** Integrator tolerance of the verification (default 1e-5). */
   verifyRtol?: number;
+  /** Return the final LP of every set (`solvedSets`), for cross-checks; default false (the result stays small and clonable). */
+  keepSolvedSets?: boolean;
 }
 
 /** The optimisation result plus what tests and the benchmark look at. */
 export interface RunOptimisationOutput extends OptimisationResult {
-  /** Final LP of every set solved (feasible or not), in enumeration order. */
-  solvedSets: IteratedSet[];
+  /** Final LP of every set solved (feasible or not), in enumeration order; only with `keepSolvedSets`. */
+  solvedSets?: IteratedSet[];
 }
 
 interface Working extends RankItem {
@@ -89,7 +95,12 @@ interface Working extends RankItem {
  * Progress is reported through `onProgress(done, total)`, total = sets + verifications;
  * `isCancelled()` is polled between steps.
  */
-export function runOptimisation(input: RunOptimisationInput, options: RunOptimisationOptions = {}): RunOptimisationOutput {
+export function runOptimisation(input: RunOptimisationInput, runOptions: RunOptimisationOptions = {}): RunOptimisationOutput {
+  const options: RunOptimisationOptions = {
+    ...runOptions,
+    ...(runOptions.onProgress ?? input.onProgress ? { onProgress: runOptions.onProgress ?? input.onProgress } : {}),
+    ...(runOptions.isCancelled ?? input.isCancelled ? { isCancelled: runOptions.isCancelled ?? input.isCancelled } : {}),
+  };
   const brief: Brief = briefSchema.parse(input.brief);
   const port = options.port ?? fastPort(chemistryPort(input.chemistry), input.chemistry);
   const ctx = thermalContext(brief, options.extraCaps ?? []);
@@ -202,7 +213,7 @@ export function runOptimisation(input: RunOptimisationInput, options: RunOptimis
       unsettledSets: unsettled,
     },
     warnings: runWarnings,
-    solvedSets,
+    ...(options.keepSolvedSets ? { solvedSets } : {}),
   };
 }
 

@@ -24,10 +24,11 @@ export type PackType = z.infer<typeof packTypeSchema>;
 
 /**
  * How the pack exchanges heat with its surroundings when no `uaWPerK` is given: the thermal
- * model's contact cases (thermal/contact.ts) over the pack's area `packAreaM2`. `skin-fabric`
- * exchanges with the skin (33 °C) on one face and the ambient air on the other.
+ * model's contact cases (thermal/contact.ts) over the pack's area `packAreaM2`:
+ * `skin-through-fabric` (the thermal model's `skin-fabric`) exchanges with the skin (33 °C)
+ * through a fabric layer on one face and with the ambient air on the other.
  */
-export const CONTACT_CASES = ['still-air', 'skin-fabric', 'insulated'] as const;
+export const CONTACT_CASES = ['still-air', 'skin-through-fabric', 'insulated'] as const;
 export const contactCaseSchema = z.enum(CONTACT_CASES, { error: `must be one of ${CONTACT_CASES.join(', ')}` });
 export type ContactCase = z.infer<typeof contactCaseSchema>;
 
