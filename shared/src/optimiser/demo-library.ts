@@ -134,7 +134,9 @@ export const DEMO_BRIEFS: readonly BriefInput[] = [
   {
     name: 'Glove warmer insert',
     packType: 'warm',
-    ambientC: 20,
+    // A winter glove: −5 °C outside, the insert opened at room temperature.
+    ambientC: -5,
+    initialTempC: 15,
     targetTempC: 38,
     bandK: 3,
     reachWithinMin: 20,
@@ -143,7 +145,8 @@ export const DEMO_BRIEFS: readonly BriefInput[] = [
     packAreaM2: 0.01,
     maxMassG: 80,
     maxUnitCost: '0.80',
-    maxSurfaceTempC: 52,
+    // Worn inside a glove lining, not on bare skin; the hazard notes carry the burn cautions.
+    maxSurfaceTempC: 55,
     packaging: { massG: 4, heatCapacityJPerK: 8, cost: '0.04' },
     objective: 'least-mass',
     maxActives: 2,

@@ -121,6 +121,8 @@ export interface IngredientCoefficients {
   o2MolPerG: number;
   /** O2 the film can supply, mol/s (air oxidation with a known film area), else null. */
   o2SupplyMolPerS: number | null;
+  /** Intrinsic first-order oxidation rate constant, 1/s (air oxidation), else 0. */
+  oxidationRatePerS: number;
   /** Melting point, °C (crystallisation): above it the melt cannot crystallise. */
   meltingPointC: number | null;
   costPerG: number;
@@ -202,6 +204,7 @@ export function ingredientCoefficients(p: ParsedIngredient, targetTempC: number,
     gasLPerG: 0,
     o2MolPerG: 0,
     o2SupplyMolPerS: null,
+    oxidationRatePerS: 0,
     meltingPointC: null,
     costPerG: p.costPerG,
     warnings: [],
@@ -278,6 +281,7 @@ export function ingredientCoefficients(p: ParsedIngredient, targetTempC: number,
       cpFinalJPerGK: o2 * o.oxidePerO2 * o.oxideCpMolar,
       o2MolPerG: o2,
       o2SupplyMolPerS: o.o2SupplyMolPerS,
+      oxidationRatePerS: o.kPerS,
       warnings: m.warnings.list(),
     };
   }
@@ -305,7 +309,7 @@ export interface LinearConstraint {
   coefficients: number[];
   sense: 'le' | 'ge';
   rhs: number;
-  /** Unit of rhs and of Σ a_i·m_i: `J`, `g`, `currency`, `L`, `mol`. */
+  /** Unit of rhs and of Σ a_i·m_i: `J`, `g`, `currency`, `L`, `mol`, `W`. */
   unit: string;
   /** Size of "one unit" for sensitivity, in `unit` (1 kJ = 1000 J, 1 g, 1 currency unit, 1 L, 1 mmol). */
   unitStep: number;
@@ -351,9 +355,17 @@ export interface LinearModel {
  * - surface-temperature (≤, J), when limited (cold: minSurfaceTempC, warm: maxSurfaceTempC):
  *   even adiabatically the pack may not pass the limit T_lim:
  *   Σ u_i(T_lim)·m_i ≤ s·C_pack·(T₀ − T_lim). Conservative: it assumes everything dissolves or
- *   reacts before any heat is exchanged.
- * - oxygen-supply (≤, mol), per oxidising metal with a known film area: the O2 it takes up
- *   cannot exceed what the film lets in over reach + hold: o_i·m_i ≤ Ṅ_O2·(t_reach + t_hold).
+ *   reacts before any heat is exchanged. Air oxidation is left out of it (its heat comes at
+ *   the film-limited rate over hours); the verification checks its peak.
+ * - air oxidation with a known film area (iron warmers): O2 enters at the film's rate Ṅ_O2 =
+ *   permeance·area·Δp_O2 while the metal's own rate k·(O2 capacity left) exceeds it, so the
+ *   pack gets Ṅ_O2·|ΔH_O2| watts whatever the metal's mass; that heat over reach + hold,
+ *   Q_film = Ṅ_O2·|ΔH_O2|·(t_reach + t_hold), joins the heat budget's right-hand side (its
+ *   per-gram heat is then only sensible). oxygen-supply (≥, mol): enough metal to stay
+ *   film-limited to the end, o_i·m_i ≥ Ṅ_O2·(t_reach + t_hold + 1/k). With a warm pack's
+ *   surface limit, the film-limited steady state T_env + Ṅ_O2·|ΔH_O2|/UA must not pass it: a
+ *   row with no per-gram terms, 0 ≥ Ṅ_O2·|ΔH_O2| − UA·(T_lim − T_env) (W), that only the
+ *   film and the contact can satisfy.
  * - concentration-cap (≤, g), per cap on a member: m_k − f_k·Σ m_i ≤ 0.
  * - additive-ratio (≥/≤, g), per need of a member: m_d − r_min·m_a ≥ 0, m_d − r_max·m_a ≤ 0.
  *
@@ -366,9 +378,18 @@ export function buildLinearModel(set: IngredientSet, coefficients: IngredientCoe
   const tStar = ctx.targetTempC;
   const s = ctx.sign;
   const rows: LinearConstraint[] = [];
-  const useful = coefficients.map((c) => usefulHeatJPerG(c, ctx, tStar));
+  const horizonS = ctx.reachWithinS + ctx.holdS;
+  // A film-limited oxidiser delivers Ṅ_O2·|ΔH_O2| W for the whole horizon (the oxygen-supply row
+  // keeps enough metal for that), whatever its mass: that heat moves to the right-hand side and
+  // only its sensible heat stays per gram.
+  const filmLimited = coefficients.map((c) => c.kind === 'air-oxidation' && c.o2SupplyMolPerS !== null && c.o2MolPerG > 0 && c.oxidationRatePerS > 0);
+  let filmHeatJ = 0;
+  coefficients.forEach((c, i) => {
+    if (filmLimited[i]) filmHeatJ += (-c.heatAbsorbedJPerG / c.o2MolPerG) * c.o2SupplyMolPerS! * horizonS;
+  });
+  const useful = coefficients.map((c, i) => usefulHeatJPerG(filmLimited[i] ? { ...c, heatAbsorbedJPerG: 0 } : c, ctx, tStar));
   const exchangeJPerS = ctx.uaWPerK * s * (ctx.envTempC - tStar);
-  const heatBudgetJ = exchangeJPerS * ctx.holdS + s * ctx.packaging.heatCapacityJPerK * (ctx.initialTempC - tStar);
+  const heatBudgetJ = exchangeJPerS * ctx.holdS + s * ctx.packaging.heatCapacityJPerK * (ctx.initialTempC - tStar) + s * filmHeatJ;
   rows.push({
     id: 'heat-budget',
     kind: 'heat-budget',
@@ -425,7 +446,9 @@ export function buildLinearModel(set: IngredientSet, coefficients: IngredientCoe
       id: 'surface-temperature',
       kind: 'surface-temperature',
       label: ctx.packType === 'cold' ? `never colder than ${tl} °C (adiabatic)` : `never warmer than ${tl} °C (adiabatic)`,
-      coefficients: coefficients.map((c) => usefulHeatJPerG(c, ctx, tl)),
+      // Air oxidation releases its heat at the film-limited rate over hours, not at once: its
+      // heat is left out here (its peak, T_env + Ṅ_O2·|ΔH|/UA, is left to the verification).
+      coefficients: coefficients.map((c) => usefulHeatJPerG(c.kind === 'air-oxidation' ? { ...c, heatAbsorbedJPerG: 0 } : c, ctx, tl)),
       sense: 'le',
       rhs: s * ctx.packaging.heatCapacityJPerK * (ctx.initialTempC - tl),
       unit: 'J',
@@ -434,20 +457,36 @@ export function buildLinearModel(set: IngredientSet, coefficients: IngredientCoe
     });
   }
   coefficients.forEach((c, j) => {
-    if (c.kind !== 'air-oxidation' || c.o2SupplyMolPerS === null) return;
+    if (!filmLimited[j]) return;
+    const supply = c.o2SupplyMolPerS!;
     const row = new Array<number>(nv).fill(0);
     row[j] = c.o2MolPerG;
     rows.push({
       id: `oxygen-supply:${c.ingredient.id}`,
       kind: 'oxygen-supply',
-      label: `O2 the film lets in for ${c.ingredient.name} over ${(ctx.reachWithinS + ctx.holdS) / 60} min`,
+      label: `enough ${c.ingredient.name} to take up O2 at the film's rate for ${horizonS / 60} min`,
       coefficients: row,
-      sense: 'le',
-      rhs: c.o2SupplyMolPerS * (ctx.reachWithinS + ctx.holdS),
+      sense: 'ge',
+      rhs: supply * (horizonS + 1 / c.oxidationRatePerS),
       unit: 'mol',
       unitStep: 1e-3,
       unitLabel: 'mmol O2',
     });
+    if (ctx.surfaceLimitC !== null && ctx.packType === 'warm') {
+      // Steady state of a film-limited oxidiser: T = T_env + Ṅ·|ΔH|/UA, whatever its mass.
+      const powerW = (-c.heatAbsorbedJPerG / c.o2MolPerG) * supply;
+      rows.push({
+        id: `surface-temperature:steady:${c.ingredient.id}`,
+        kind: 'surface-temperature',
+        label: `${c.ingredient.name} at the film's O2 rate settles at most ${ctx.surfaceLimitC} °C`,
+        coefficients: new Array<number>(nv).fill(0),
+        sense: 'ge',
+        rhs: powerW - ctx.uaWPerK * (ctx.surfaceLimitC - ctx.envTempC),
+        unit: 'W',
+        unitStep: 1,
+        unitLabel: 'W',
+      });
+    }
   });
   for (const cap of ctx.caps) {
     const k = coefficients.findIndex((c) => c.ingredient.id === cap.ingredientId);
