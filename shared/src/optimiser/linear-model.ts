@@ -34,6 +34,9 @@ import type { IngredientSet, OptimiserIngredient, OptimiserWarning } from './typ
 /** Molar volume of an ideal gas at 25 °C and 1 atm, L/mol: R·T/p = 8.314462618·298.15/101325 × 1000. */
 export const GAS_MOLAR_VOLUME_L_PER_MOL = (8.314462618 * 298.15) / 101325 * 1000;
 
+/** Lowest solute mass fraction the apparent heat capacity is evaluated at (see ingredientCoefficients). */
+export const MIN_CP_MASS_FRACTION = 0.01;
+
 /** The concentration the enthalpy of solution and the solution heat capacity are evaluated at. */
 export interface ConcentrationEstimate {
   /** Mol of liquid water per mol of dissolved solute (all solutes together); Infinity: infinite dilution. */
@@ -222,8 +225,9 @@ export function ingredientCoefficients(p: ParsedIngredient, targetTempC: number,
       base.warnings.push(...r.warnings);
       dsol = r.value;
     }
-    // As the time model: the apparent cp at the total solute fraction (at most 0.95), at 25 °C.
-    const app = port.apparentSoluteCp_J_per_gK(s.soluteKey, Math.min(estimate.soluteMassFraction, 0.95), REFERENCE_TEMP_C);
+    // As the time model: the apparent cp at the total solute fraction (at most 0.95), at 25 °C;
+    // at least 0.01, since Laliberté's (1 − w_w)^a6 term diverges at infinite dilution for a6 < 0.
+    const app = port.apparentSoluteCp_J_per_gK(s.soluteKey, Math.min(Math.max(estimate.soluteMassFraction, MIN_CP_MASS_FRACTION), 0.95), REFERENCE_TEMP_C);
     base.warnings.push(...app.warnings);
     const cpApp = app.value;
     const molPerG = 1 / s.solidMolarMass;
@@ -532,6 +536,14 @@ export function buildLinearModel(set: IngredientSet, coefficients: IngredientCoe
     objective = { sense: 'max', coefficients: useful.map((u) => u / exchangeJPerMin), constant: -heatBudgetJ / exchangeJPerMin, unit: 'min' };
   } else {
     objective = { sense: 'max', coefficients: useful.map((u) => u / 1000), constant: -heatBudgetJ / 1000, unit: 'kJ' };
+  }
+  for (const r of rows) {
+    const bad = r.coefficients.findIndex((a) => !Number.isFinite(a));
+    if (bad >= 0 || !Number.isFinite(r.rhs)) {
+      throw new RangeError(
+        `linear model of ${set.key}: expected finite coefficients in row ${r.id}, found ${bad >= 0 ? `${r.coefficients[bad]} for ${coefficients[bad]!.ingredient.id}` : `rhs ${r.rhs}`}`,
+      );
+    }
   }
   return { set, coefficients, constraints: rows, objective, usefulHeatJPerG: useful, heatBudgetJ, exchangeJPerMin, context: ctx, estimate };
 }

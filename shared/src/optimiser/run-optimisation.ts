@@ -144,7 +144,16 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
       break;
     }
     const members = set.members.map((m) => parsed.get(m.id)!);
-    const it = solveSetIterated(set, members, ctx, port, options.iteration, counter);
+    let it: IteratedSet;
+    try {
+      it = solveSetIterated(set, members, ctx, port, options.iteration, counter);
+    } catch (e) {
+      const names = set.members.filter((m) => set.activeIds.includes(m.id)).map((m) => m.name);
+      infeasible.push({ setIds: set.activeIds, setNames: names, blocking: [], reason: `cannot be modelled: ${(e as Error).message}` });
+      done++;
+      options.onProgress?.(done, total);
+      continue;
+    }
     solvedSets.push(it);
     if (it.solution.status === 'optimal') {
       if (!it.settled) unsettled++;
