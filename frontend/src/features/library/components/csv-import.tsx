@@ -116,7 +116,7 @@ function ImportReport({ fileName, problems }: { fileName: string; problems: Impo
   const sorted = [...problems].sort((a, b) => (a.row ?? 0) - (b.row ?? 0));
   return (
     <section aria-labelledby="import-report-title" className="flex flex-col gap-3">
-      <Alert tone="danger" title={<span id="import-report-title">Nothing was imported: {formatCount(badRows, 'row')} of {fileName} need fixing</span>}>
+      <Alert tone="danger" title={<span id="import-report-title">Nothing was imported: {formatCount(badRows, 'row')} of {fileName} {badRows === 1 ? 'needs' : 'need'} fixing</span>}>
         Fix the rows below in the file (row numbers as your spreadsheet shows them; the header is row 1), choose it again and
         check it once more. The import is all or nothing.
       </Alert>

@@ -43,7 +43,7 @@ export function IngredientHistory({ ingredientId }: { ingredientId: number }) {
             <p className="font-semibold text-ink-900">
               {ACTIONS[event.action] ?? event.action}
               {version !== null && <span className="font-normal text-ink-500"> · version {version}</span>}
-              {via && <span className="font-normal text-ink-500"> · by {via}</span>}
+              {via && <span className="font-normal text-ink-500"> · via {via}</span>}
             </p>
             <p className="text-ink-600">
               {event.actor ?? 'Packwright'} ·{' '}

@@ -62,7 +62,7 @@ export function BenchResults({
         <Figure
           label="Minutes in the band"
           value={band ? minutes(result.minutesInBand) : '—'}
-          note={band ? `time to target ${minutes(result.timeToTargetMin)}` : 'set a target band'}
+          note={band ? (result.timeToTargetMin !== null ? `target reached after ${minutes(result.timeToTargetMin)}` : `of the ${formatQuantity(result.curve.at(-1)?.tMin ?? 0, 'min', 0)} hold`) : 'set a target band'}
         />
       </dl>
 
@@ -103,9 +103,9 @@ export function BenchResults({
       {result.iceG > 0.01 && <Alert tone="caution">About {formatQuantity(result.iceG, 'g')} of ice forms: the pack sits on its freezing line.</Alert>}
 
       <table className="w-full text-left text-small">
-        <caption className="mb-1 text-left text-small font-bold text-ink-900">Energy over the hold (kJ; + released, − absorbed)</caption>
+        <caption className="mb-1 text-left text-small font-bold text-ink-900">Energy over the hold (kJ)</caption>
         <tbody className="divide-y divide-ink-100 tabular-nums">
-          {result.energy.processes.map((p) => (
+          {result.energy.processes.filter((p) => Math.abs(p.heatReleasedJ) >= 0.5).map((p) => (
             <tr key={`p-${p.label}`}>
               <th scope="row" className="py-1.5 pr-3 font-normal">
                 {p.label} <span className="text-ink-500">({p.kind})</span>
@@ -114,15 +114,15 @@ export function BenchResults({
             </tr>
           ))}
           <tr>
-            <th scope="row" className="py-1.5 pr-3 font-semibold">Heat released by the processes</th>
+            <th scope="row" className="py-1.5 pr-3 font-semibold">Heat released by the processes <span className="font-normal text-ink-500">(− absorbed)</span></th>
             <td className="py-1.5 text-right font-semibold">{kJ(result.energy.heatReleasedJ)}</td>
           </tr>
           <tr>
-            <th scope="row" className="py-1.5 pr-3 font-normal">Heat stored in the pack (sensible)</th>
+            <th scope="row" className="py-1.5 pr-3 font-normal">Heat stored in the pack, sensible <span className="text-ink-500">(− the pack cooled)</span></th>
             <td className="py-1.5 text-right">{kJ(result.energy.heatStoredJ)}</td>
           </tr>
           <tr>
-            <th scope="row" className="py-1.5 pr-3 font-normal">Heat lost to the surroundings</th>
+            <th scope="row" className="py-1.5 pr-3 font-normal">Heat lost to the surroundings <span className="text-ink-500">(− gained from them)</span></th>
             <td className="py-1.5 text-right">{kJ(result.energy.heatLostJ)}</td>
           </tr>
           <tr>

@@ -67,18 +67,23 @@ export function MixtureBench({ library, ingredients }: { library: ChemistryLibra
           <form noValidate onSubmit={(event) => event.preventDefault()} className="flex flex-col gap-5">
             <fieldset className="flex flex-col gap-3">
               <legend className="mb-2 text-small font-bold text-ink-900">Components</legend>
+              <div aria-hidden="true" className="grid grid-cols-[7.5rem_minmax(0,1fr)_6.5rem_4.5rem] gap-2 text-caption font-semibold text-ink-600">
+                <span>From</span>
+                <span>Ingredient or formula</span>
+                <span>Mass (g)</span>
+              </div>
               {components.fields.map((field, k) => {
                 const source = values.components[k]?.source ?? 'ingredient';
                 return (
-                  <div key={field.id} className="grid grid-cols-[7.5rem_minmax(0,1fr)_6.5rem_auto] items-start gap-2 border-b border-ink-100 pb-3">
-                    <SelectField label={`Component ${k + 1}: from`} hideLabel={k > 0} controlSize="md" {...form.register(`components.${k}.source`)}>
+                  <div key={field.id} className="grid grid-cols-[7.5rem_minmax(0,1fr)_6.5rem_4.5rem] items-start gap-2 border-b border-ink-100 pb-3">
+                    <SelectField label={`Component ${k + 1}: from`} hideLabel controlSize="md" {...form.register(`components.${k}.source`)}>
                       <option value="ingredient">Library</option>
                       <option value="formula">Formula</option>
                     </SelectField>
                     {source === 'ingredient' ? (
                       <SelectField
                         label={`Component ${k + 1}: ingredient`}
-                        hideLabel={k > 0}
+                        hideLabel
                         error={errorOf(`components.${k}.ingredientId`)}
                         {...form.register(`components.${k}.ingredientId`)}
                       >
@@ -97,7 +102,7 @@ export function MixtureBench({ library, ingredients }: { library: ChemistryLibra
                     ) : (
                       <TextField
                         label={`Component ${k + 1}: formula`}
-                        hideLabel={k > 0}
+                        hideLabel
                         placeholder="NH4NO3, H2O, CaCl2·6H2O"
                         autoComplete="off"
                         spellCheck={false}
@@ -107,7 +112,7 @@ export function MixtureBench({ library, ingredients }: { library: ChemistryLibra
                     )}
                     <TextField
                       label={`Component ${k + 1}: mass (g)`}
-                      hideLabel={k > 0}
+                      hideLabel
                       inputMode="decimal"
                       error={errorOf(`components.${k}.massG`)}
                       {...form.register(`components.${k}.massG`)}
@@ -115,7 +120,7 @@ export function MixtureBench({ library, ingredients }: { library: ChemistryLibra
                     <Button
                       variant="ghost"
                       size="sm"
-                      className={k === 0 ? 'mt-7' : 'mt-1'}
+                      className="mt-1"
                       disabled={components.fields.length <= 1}
                       onClick={() => components.remove(k)}
                     >

@@ -142,18 +142,23 @@ function TermList({
   return (
     <fieldset className={cn('flex flex-col gap-2 rounded-control', sideError && 'border-l-4 border-rust-500 pl-3')} aria-describedby={sideError ? `${side}-error` : undefined}>
       <legend className="mb-1 text-small font-bold text-ink-900">{title}</legend>
+      <div aria-hidden="true" className="grid grid-cols-[5rem_minmax(0,1fr)_8.5rem_4.5rem] gap-2 text-caption font-semibold text-ink-600">
+        <span>Coefficient (mol)</span>
+        <span>Formula</span>
+        <span>Phase</span>
+      </div>
       {terms.fields.map((field, k) => (
-        <div key={field.id} className="grid grid-cols-[5rem_minmax(0,1fr)_8.5rem_auto] items-start gap-2">
-          <TextField label={`${singular} ${k + 1}: coefficient (mol)`} hideLabel={k > 0} inputMode="decimal" error={errorOf(`${side}.${k}.coef`)} {...register(`${side}.${k}.coef`)} />
+        <div key={field.id} className="grid grid-cols-[5rem_minmax(0,1fr)_8.5rem_4.5rem] items-start gap-2">
+          <TextField label={`${singular} ${k + 1}: coefficient (mol)`} hideLabel inputMode="decimal" error={errorOf(`${side}.${k}.coef`)} {...register(`${side}.${k}.coef`)} />
           <TextField
             label={`${singular} ${k + 1}: formula`}
-            hideLabel={k > 0}
+            hideLabel
             autoComplete="off"
             spellCheck={false}
             error={errorOf(`${side}.${k}.formula`)}
             {...register(`${side}.${k}.formula`)}
           />
-          <SelectField label={`${singular} ${k + 1}: phase`} hideLabel={k > 0} error={errorOf(`${side}.${k}.phase`)} {...register(`${side}.${k}.phase`)}>
+          <SelectField label={`${singular} ${k + 1}: phase`} hideLabel error={errorOf(`${side}.${k}.phase`)} {...register(`${side}.${k}.phase`)}>
             <option value="">from formula</option>
             {PHASES.map((p) => (
               <option key={p} value={p}>
@@ -161,7 +166,7 @@ function TermList({
               </option>
             ))}
           </SelectField>
-          <Button variant="ghost" size="sm" className={k === 0 ? 'mt-7' : 'mt-1'} disabled={terms.fields.length <= 1} onClick={() => terms.remove(k)}>
+          <Button variant="ghost" size="sm" className="mt-1" disabled={terms.fields.length <= 1} onClick={() => terms.remove(k)}>
             Remove<span className="sr-only"> {singular.toLowerCase()} {k + 1}</span>
           </Button>
         </div>
