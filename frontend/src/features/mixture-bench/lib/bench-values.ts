@@ -1,6 +1,8 @@
 import { evaluateMixtureRequestSchema, type EvaluateMixtureRequest } from '@shared/schemas/mixtures';
+import type { ContactCase } from '@shared/thermal';
 
-export type ExchangeChoice = 'still-air' | 'skin-fabric' | 'insulated' | 'ua';
+/** A contact case of the thermal model, or a UA given directly. */
+export type ExchangeChoice = ContactCase['case'] | 'ua';
 
 export type BenchComponentValues = {
   source: 'ingredient' | 'formula';
