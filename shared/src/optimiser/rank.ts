@@ -24,6 +24,7 @@ export const TIE_TOLERANCE = 1e-9;
 const GROUP: Record<Verification['status'], number> = { passed: 0, 'not-verified': 1, missed: 2, failed: 3 };
 
 function nearlyEqual(a: number, b: number, tol = TIE_TOLERANCE): boolean {
+  if (!Number.isFinite(a) || !Number.isFinite(b)) return a === b;
   return Math.abs(a - b) <= tol * Math.max(1, Math.abs(a), Math.abs(b));
 }
 

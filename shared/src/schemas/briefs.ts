@@ -249,8 +249,10 @@ export type CreateBriefRequest = z.output<typeof createBriefRequestSchema>;
  */
 export const updateBriefRequestSchema = z
   .object(
-    Object.fromEntries(Object.entries(briefFields).map(([k, v]) => [k, (v as z.ZodType).optional()])) as {
-      [K in keyof typeof briefFields]: z.ZodOptional<(typeof briefFields)[K]>;
+    Object.fromEntries(
+      Object.entries(briefFields).map(([k, v]) => [k, (v instanceof z.ZodDefault ? (v.unwrap() as z.ZodType) : (v as z.ZodType)).optional()]),
+    ) as {
+      [K in keyof typeof briefFields]: z.ZodOptional<z.ZodType<z.output<(typeof briefFields)[K]>, z.input<(typeof briefFields)[K]>>>;
     },
   )
   .extend({ version: z.number({ error: 'is required' }).int().min(0) });
