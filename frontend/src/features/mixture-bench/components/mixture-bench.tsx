@@ -67,7 +67,7 @@ export function MixtureBench({ library, ingredients }: { library: ChemistryLibra
           <form noValidate onSubmit={(event) => event.preventDefault()} className="flex flex-col gap-5">
             <fieldset className="flex flex-col gap-3">
               <legend className="mb-2 text-small font-bold text-ink-900">Components</legend>
-              <div aria-hidden="true" className="grid grid-cols-[6.5rem_minmax(0,1fr)_5rem_4.25rem] gap-2 text-caption font-semibold text-ink-600">
+              <div aria-hidden="true" className="grid grid-cols-[7.25rem_minmax(0,1fr)_5rem_4.25rem] gap-2 text-caption font-semibold text-ink-600">
                 <span>From</span>
                 <span>Ingredient or formula</span>
                 <span>Mass (g)</span>
@@ -75,7 +75,7 @@ export function MixtureBench({ library, ingredients }: { library: ChemistryLibra
               {components.fields.map((field, k) => {
                 const source = values.components[k]?.source ?? 'ingredient';
                 return (
-                  <div key={field.id} className="grid grid-cols-[6.5rem_minmax(0,1fr)_5rem_4.25rem] items-start gap-2 border-b border-ink-100 pb-3">
+                  <div key={field.id} className="grid grid-cols-[7.25rem_minmax(0,1fr)_5rem_4.25rem] items-start gap-2 border-b border-ink-100 pb-3">
                     <SelectField label={`Component ${k + 1}: from`} hideLabel controlSize="md" {...form.register(`components.${k}.source`)}>
                       <option value="ingredient">Library</option>
                       <option value="formula">Formula</option>
