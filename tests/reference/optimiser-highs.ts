@@ -13,8 +13,8 @@ export function highsModule(): Promise<Highs> {
   return loaded;
 }
 
-/** Solve an LpProblem with HiGHS (dual simplex by default), x ≥ 0. */
-export function solveWithHighs(highs: Highs, problem: LpProblem): LpSolution {
+/** Solve an LpProblem with HiGHS (dual simplex by default), x ≥ 0. `rowDuals` (one per problem row, NaN for dropped empty rows) when optimal. */
+export function solveWithHighs(highs: Highs, problem: LpProblem): LpSolution & { rowDuals?: number[] } {
   const zeros = new Array<number>(problem.size).fill(0);
   const model = highs.createModel();
   try {
@@ -22,6 +22,8 @@ export function solveWithHighs(highs: Highs, problem: LpProblem): LpSolution {
     model.addVars(new Float64Array(problem.size), new Float64Array(problem.size).fill(highs.infinity));
     problem.objective.forEach((c, i) => model.changeColCost(i, c));
     model.changeObjectiveSense(problem.sense === 'max' ? highs.constants.objectiveSense.maximize : highs.constants.objectiveSense.minimize);
+    const rowIndex: number[] = [];
+    let added = 0;
     for (const row of problem.rows) {
       const indices: number[] = [];
       const values: number[] = [];
@@ -35,15 +37,19 @@ export function solveWithHighs(highs: Highs, problem: LpProblem): LpSolution {
       const hi = row.sense === 'le' ? row.rhs : highs.infinity;
       if (indices.length === 0) {
         if (0 < lo || 0 > hi) return { status: 'infeasible', x: zeros, objective: 0 };
+        rowIndex.push(-1);
         continue;
       }
+      rowIndex.push(added++);
       model.addRow(lo, hi, { indices: new Int32Array(indices), values: new Float64Array(values) });
     }
     model.run();
     const status = model.getModelStatus();
     if (status === highs.constants.modelStatus.optimal) {
-      const x = Array.from(model.getSolution().colValue, (v) => Math.max(0, v));
-      return { status: 'optimal', x, objective: x.reduce((s, v, i) => s + v * (problem.objective[i] ?? 0), 0) };
+      const sol = model.getSolution();
+      const x = Array.from(sol.colValue, (v) => Math.max(0, v));
+      const rowDuals = rowIndex.map((r) => (r < 0 ? NaN : sol.rowDual[r]!));
+      return { status: 'optimal', x, objective: x.reduce((s, v, i) => s + v * (problem.objective[i] ?? 0), 0), rowDuals };
     }
     if (status === highs.constants.modelStatus.infeasible) return { status: 'infeasible', x: zeros, objective: 0 };
     if (status === highs.constants.modelStatus.unbounded) return { status: 'unbounded', x: zeros, objective: problem.sense === 'min' ? -Infinity : Infinity };

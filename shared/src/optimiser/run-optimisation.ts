@@ -92,7 +92,8 @@ interface Working extends RankItem {
  * 5. order by the objective, verify the best `verifyTop` with the time model (verify.ts), then
  *    rank: passed, not verified, missed, failed; objective; simpler first (rank.ts); flag the
  *    Pareto front; sensitivity of the verified candidates' binding constraints.
- * Progress is reported through `onProgress(done, total)`, total = sets + verifications;
+ * Progress is reported through `onProgress(done, total)`, total = sets + verifications (the
+ * verification count is known once the sets are solved, so total may shrink then);
  * `isCancelled()` is polled between steps.
  */
 export function runOptimisation(input: RunOptimisationInput, runOptions: RunOptimisationOptions = {}): RunOptimisationOutput {
@@ -131,7 +132,7 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
   });
 
   const sets = enumeration.sets;
-  const total = sets.length + Math.min(verifyTop, sets.length);
+  let total = sets.length + Math.min(verifyTop, sets.length);
   let done = 0;
   let cancelled = false;
   const solvedSets: IteratedSet[] = [];
@@ -177,7 +178,9 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
   });
 
   let verified = 0;
-  for (const w of distinct.slice(0, verifyTop)) {
+  const toVerify = distinct.slice(0, verifyTop);
+  if (!cancelled) total = done + toVerify.length;
+  for (const w of toVerify) {
     if (cancelled || options.isCancelled?.()) {
       cancelled = true;
       break;
