@@ -23,6 +23,13 @@ const EVERYONE = ROLES;
 export const NAV_ITEMS: readonly NavItem[] = [
   { to: '/', label: 'Home', description: 'What is waiting for you.', roles: EVERYONE, end: true, quickLink: false },
   {
+    to: '/briefs',
+    label: 'Briefs',
+    description: 'Thermal targets and limits; run the optimiser and weigh its candidates.',
+    roles: EVERYONE,
+    quickLink: true,
+  },
+  {
     to: '/library',
     label: 'Ingredient library',
     description: 'Ingredients with their grades, costs, processes, sources and safety data sheets.',

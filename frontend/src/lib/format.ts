@@ -113,3 +113,16 @@ export function formatMoney(value: string | number | null | undefined, currency:
 export function formatCount(count: number, singular: string, plural = `${singular}s`): string {
   return `${formatNumber(count, { maxFractionDigits: 0 })} ${count === 1 ? singular : plural}`;
 }
+
+/** How long something took, from two instants: "0.8 s", "42 s", "3 min 5 s"; "—" while unfinished. */
+export function formatDuration(start: string | number | Date | null | undefined, end: string | number | Date | null | undefined, empty = '—'): string {
+  if (start === null || start === undefined || end === null || end === undefined) return empty;
+  const a = toDate(start);
+  const b = toDate(end);
+  if (!a || !b) return empty;
+  const seconds = Math.max(0, (b.getTime() - a.getTime()) / 1000);
+  if (seconds < 10) return `${formatNumber(seconds, { maxFractionDigits: 1 })}\u202fs`;
+  if (seconds < 60) return `${formatNumber(seconds, { maxFractionDigits: 0 })}\u202fs`;
+  const minutes = Math.floor(seconds / 60);
+  return `${formatNumber(minutes, { maxFractionDigits: 0 })}\u202fmin ${formatNumber(Math.round(seconds - minutes * 60), { maxFractionDigits: 0 })}\u202fs`;
+}

@@ -1,0 +1,171 @@
+import { useState } from 'react';
+import type { QueryClient } from '@tanstack/react-query';
+import { Link, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { RunStatusBadge } from '@/components/status/run-status-badge';
+import { Badge } from '@/components/ui/badge';
+import { Button } from '@/components/ui/button';
+import { Card, CardBody, CardHeader } from '@/components/ui/card';
+import { FormMessage } from '@/components/ui/field';
+import { PageHeader } from '@/components/ui/page-header';
+import { QueryError } from '@/components/ui/query-error';
+import { Loading } from '@/components/ui/spinner';
+import { getBriefQueryOptions, useBrief } from '@/features/briefs/api/get-brief';
+import { getBriefRunsQueryOptions } from '@/features/briefs/api/get-brief-runs';
+import { useDeleteBrief } from '@/features/briefs/api/save-brief';
+import { useStartRun } from '@/features/briefs/api/start-run';
+import { BriefForm } from '@/features/briefs/components/brief-form';
+import { BriefRunsList } from '@/features/briefs/components/brief-runs-list';
+import { BriefSummary } from '@/features/briefs/components/brief-summary';
+import { errorMessage } from '@/lib/api-client';
+import { formatDateTime } from '@/lib/format';
+import { hasRole, useSessionUser } from '@/lib/session';
+import { requireUser } from '../../../guards';
+
+function idFrom(value: string | undefined): number {
+  const id = Number(value);
+  return Number.isInteger(id) && id > 0 ? id : 0;
+}
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request, params }: LoaderFunctionArgs) => {
+    await requireUser(queryClient, request);
+    const id = idFrom(params.id);
+    if (id) {
+      void queryClient.prefetchQuery(getBriefQueryOptions(id));
+      void queryClient.prefetchQuery(getBriefRunsQueryOptions(id));
+    }
+    return null;
+  };
+
+export default function BriefRoute() {
+  const me = useSessionUser();
+  const id = idFrom(useParams().id);
+  const brief = useBrief(id);
+  const navigate = useNavigate();
+  const [search, setSearch] = useSearchParams();
+  const editing = search.get('edit') === '1';
+  const setEditing = (on: boolean) => setSearch(on ? { edit: '1' } : {}, { replace: true });
+  const canWrite = hasRole(me, ['designer', 'admin']);
+  const startRun = useStartRun();
+  const remove = useDeleteBrief();
+  const [confirmDelete, setConfirmDelete] = useState(false);
+
+  const back = (
+    <p className="mb-2 text-small">
+      <Link to="/briefs" className="font-semibold text-frost-700 hover:underline">
+        ← Briefs
+      </Link>
+    </p>
+  );
+  if (!id || brief.isError)
+    return (
+      <>
+        {back}
+        <QueryError title="This brief could not be loaded" error={brief.error ?? new Error('There is no brief at this address.')} onRetry={id ? () => void brief.refetch() : undefined} retrying={brief.isFetching} />
+      </>
+    );
+  if (brief.isPending)
+    return (
+      <>
+        {back}
+        <Loading label="Loading the brief…" />
+      </>
+    );
+
+  const b = brief.data;
+  const run = () => startRun.mutate(b.id, { onSuccess: (runId) => void navigate(`/runs/${runId}`) });
+
+  return (
+    <>
+      <title>{`${b.name} · Briefs · Packwright`}</title>
+      {back}
+      <PageHeader
+        title={b.name}
+        description={
+          <>
+            Version {b.version} · changed {formatDateTime(b.updatedAt)}
+            {b.updatedBy ? ` by ${b.updatedBy}` : ''}
+            {b.lastRun && (
+              <>
+                {' · last run '}
+                <Link to={`/runs/${b.lastRun.id}`} className="font-semibold text-frost-700 hover:underline">
+                  {formatDateTime(b.lastRun.createdAt)}
+                </Link>{' '}
+                <RunStatusBadge status={b.lastRun.status} />
+              </>
+            )}
+          </>
+        }
+        action={
+          canWrite ? (
+            <div className="flex flex-wrap gap-2">
+              {!editing && (
+                <Button variant="secondary" onClick={() => setEditing(true)}>
+                  Edit the brief
+                </Button>
+              )}
+              <Button onClick={run} pending={startRun.isPending} pendingLabel="Starting…" disabled={editing}>
+                Run optimiser
+              </Button>
+            </div>
+          ) : (
+            <Badge>Read only</Badge>
+          )
+        }
+      />
+      {startRun.isError && <FormMessage>{errorMessage(startRun.error)}</FormMessage>}
+
+      <div className="flex flex-col gap-gutter">
+        <Card>
+          <CardHeader
+            title={editing ? 'Edit the brief' : 'The brief'}
+            description={editing ? 'Saving makes a new version; earlier runs keep the version they ran.' : undefined}
+          />
+          <CardBody>
+            {editing ? (
+              <BriefForm
+                key={`${b.id}-${b.version}`}
+                brief={b}
+                currency={me.workspace.currency}
+                onSaved={() => setEditing(false)}
+                onCancel={() => setEditing(false)}
+                onReload={async () => (await brief.refetch()).data}
+              />
+            ) : (
+              <BriefSummary brief={b} currency={me.workspace.currency} />
+            )}
+          </CardBody>
+        </Card>
+
+        <Card>
+          <CardHeader title="Runs" description="Each run optimises the brief as it was when the run started." />
+          <CardBody>
+            <BriefRunsList briefId={b.id} currentVersion={b.version} lastRun={b.lastRun} />
+          </CardBody>
+        </Card>
+
+        {canWrite && !editing && (
+          <div className="flex flex-wrap items-center gap-3">
+            {confirmDelete ? (
+              <>
+                <span className="text-small text-ink-700">Delete “{b.name}” and its runs?</span>
+                <Button variant="danger" size="sm" pending={remove.isPending} onClick={() => remove.mutate(b.id, { onSuccess: () => void navigate('/briefs') })}>
+                  Yes, delete it
+                </Button>
+                <Button variant="ghost" size="sm" onClick={() => setConfirmDelete(false)}>
+                  Keep it
+                </Button>
+              </>
+            ) : (
+              <Button variant="ghost" size="sm" onClick={() => setConfirmDelete(true)}>
+                Delete this brief
+              </Button>
+            )}
+            {remove.isError && <FormMessage>{errorMessage(remove.error)}</FormMessage>}
+          </div>
+        )}
+      </div>
+    </>
+  );
+}
