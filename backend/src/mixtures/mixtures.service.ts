@@ -1,57 +1,12 @@
-import {
-  FormulaError,
-  UnknownSpeciesError,
-  dissolutionProducts,
-  findSpecies,
-  hillFormula,
-  parseFormula,
-  speciesKey,
-  splitHydrate,
-} from '@shared/chemistry';
+import { FormulaError, UnknownSpeciesError } from '@shared/chemistry';
 import type { ChemistryLibrary, ComputationWarning } from '@shared/chemistry/types';
 import type { EvaluateMixtureApiResponse, FieldError } from '@shared/schemas';
 import type { EvaluateMixtureRequest, ResolvedMixture } from '@shared/schemas/mixtures';
-import { ThermalModelError, chemistryPort, evaluateMixture, type ChemistryPort, type IngredientProcessInput } from '@shared/thermal';
+import { ThermalModelError, chemistryPort, evaluateMixture, processForFormula, type ChemistryPort, type IngredientProcessInput } from '@shared/thermal';
 import { AppError } from '../http/errors';
 import type { AuthUser } from '../auth/session-user';
 import { formatCost, ingredientsByIds } from '../ingredients/ingredients.service';
 import { workspaceChemistryLibrary } from '../species/species.service';
-
-/**
- * The process of a component given as a bare formula: water (`H2O`) is the solvent; any other
- * formula is a solid that dissolves (phase `cr` unless the formula carries a phase tag), with a
- * hydrate's water of crystallisation released into the solution.
- */
-export function processForFormula(lib: ChemistryLibrary, formula: string): IngredientProcessInput {
-  const parsed = parseFormula(formula);
-  if (hillFormula(parsed) === 'H2O' && (parsed.phase === null || parsed.phase === 'l')) return { kind: 'inert', role: 'water' };
-  const solid = findSpecies(lib, formula, parsed.phase ?? 'cr');
-  if (solid.phase !== 'cr') {
-    throw new UnknownSpeciesError(`A bare formula must be water or a dissolving solid; ${solid.key} is not a solid. Add it as an ingredient with its process.`, { formula, phase: solid.phase });
-  }
-  const { anhydrous, waterCount } = splitHydrate(solid.formula);
-  let soluteKey = solid.key;
-  if (waterCount > 0) {
-    try {
-      soluteKey = findSpecies(lib, anhydrous, 'cr').key;
-    } catch {
-      soluteKey = speciesKey(anhydrous, 'cr');
-    }
-  }
-  let ions = 1;
-  try {
-    ions = Math.max(1, Math.round(dissolutionProducts(lib, soluteKey).products.reduce((n, p) => n + p.nu, 0)));
-  } catch {
-    ions = 1; // a non-electrolyte such as urea
-  }
-  return {
-    kind: 'dissolution',
-    solidKey: solid.key,
-    ...(soluteKey !== solid.key ? { soluteKey } : {}),
-    hydrateWaterPerFormula: waterCount,
-    ionsPerFormulaUnit: Math.min(6, ions),
-  };
-}
 
 // Sampling the chemistry curves for the port costs a few milliseconds per solute; keep the port
 // of the last library each workspace used while its species rows are unchanged.

@@ -33,3 +33,4 @@ export { evaluateMixture } from './evaluate-mixture';
 export { integrateDormandPrince } from './rk45';
 export type { OdeOptions, OdeSolution, OdeRhs } from './rk45';
 export { brentRoot } from './root';
+export { processForFormula } from './formula-process';

@@ -142,10 +142,6 @@ export interface MassInventory {
   lostAsGasG: number;
 }
 
-function stripPhase(key: string): string {
-  return key.replace(/\((cr|l|g|aq|ai|ao)\)$/, '');
-}
-
 function phaseOf(key: string): string | null {
   const m = /\((cr|l|g|aq|ai|ao)\)$/.exec(key);
   return m ? m[1]! : null;
