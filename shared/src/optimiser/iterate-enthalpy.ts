@@ -13,12 +13,12 @@ import { solveSet, type LpCounter, type SetSolution } from './solve-set';
 import type { IngredientSet } from './types';
 
 export interface EnthalpyIterationOptions {
-  /** Most LP passes (default 25). */
+  /** Most LP passes (default 16). */
   maxIterations?: number;
   /** Settled when n and w_s change by less than this, relative (default 1e-6). */
   tolerance?: number;
-  /** From this pass on, the next estimate is damped (geometric mean in n, mean in w) to stop oscillation (default 6). */
-  dampFrom?: number;
+  /** From this pass on, steps are scaled by the observed contraction (accelerated or damped; default 2). */
+  accelerateFrom?: number;
 }
 
 export interface IteratedSet {
@@ -64,7 +64,10 @@ export function saturationEstimate(parsed: readonly ParsedIngredient[], targetTe
  * (the least-cost optimum of a single salt is usually saturated, which settles in two passes).
  * If that LP is infeasible the pass is repeated at infinite dilution (the most heat per mole
  * for the usual salts) before the set is called infeasible. The iteration is bounded
- * (`maxIterations`); a set that has not settled is reported with `settled: false`.
+ * (`maxIterations`); a set that has not settled is reported with `settled: false`. When the
+ * composition's own concentration makes the LP infeasible, the estimate steps back towards
+ * the last feasible one (three halvings in ln n); if none is feasible the set is infeasible,
+ * reported at the composition's own concentration.
  */
 export function solveSetIterated(
   set: IngredientSet,
@@ -74,9 +77,10 @@ export function solveSetIterated(
   options: EnthalpyIterationOptions = {},
   counter?: LpCounter,
 ): IteratedSet {
-  const maxIterations = options.maxIterations ?? 25;
+  const maxIterations = options.maxIterations ?? 16;
   const tol = options.tolerance ?? 1e-6;
-  const dampFrom = options.dampFrom ?? 6;
+  const accelerateFrom = options.accelerateFrom ?? 2;
+  let previousStep: { x: number; gx: number; xw: number; gw: number } | null = null;
   const build = (est: ConcentrationEstimate) =>
     buildLinearModel(
       set,
@@ -116,16 +120,56 @@ export function solveSetIterated(
         settled = true;
         break;
       }
-      const damped: ConcentrationEstimate =
-        iterations >= dampFrom && Number.isFinite(estimate.nH2O_per_mol)
-          ? { nH2O_per_mol: Math.sqrt(estimate.nH2O_per_mol * next.nH2O_per_mol), soluteMassFraction: (estimate.soluteMassFraction + next.soluteMassFraction) / 2 }
-          : next;
-      const m = build(damped);
-      const s = solveSet(m, local);
+      // Fixed point of the map g: estimate → composition's concentration, componentwise in
+      // (ln n, w_s), by the secant on g: g' ≈ [g(x_k) − g(x_{k−1})]/(x_k − x_{k−1}), next
+      // x = x_k + [g(x_k) − x_k]/(1 − g'). This sums the remaining steps of a monotone
+      // approach (0 < g' < 1) and damps an oscillation (g' < 0); g' is clamped to [−4, 0.8].
+      let damped = next;
+      if (Number.isFinite(estimate.nH2O_per_mol)) {
+        const here = { x: Math.log(estimate.nH2O_per_mol), gx: Math.log(next.nH2O_per_mol), xw: estimate.soluteMassFraction, gw: next.soluteMassFraction };
+        const factor = (x: number, gx: number, x0: number | undefined, g0: number | undefined) => {
+          if (x0 === undefined || g0 === undefined || iterations < accelerateFrom || x === x0) return 1;
+          return 1 / (1 - Math.min(0.8, Math.max(-4, (gx - g0) / (x - x0))));
+        };
+        const fLn = factor(here.x, here.gx, previousStep?.x, previousStep?.gx);
+        const fW = factor(here.xw, here.gw, previousStep?.xw, previousStep?.gw);
+        damped = {
+          nH2O_per_mol: Math.exp(here.x + fLn * (here.gx - here.x)),
+          soluteMassFraction: Math.min(0.95, Math.max(1e-6, here.xw + fW * (here.gw - here.xw))),
+        };
+        previousStep = here;
+      } else previousStep = null;
+      let m = build(damped);
+      let s = solveSet(m, local);
       iterations++;
       if (s.status !== 'optimal') {
-        // The new coefficients make the set infeasible: keep the last feasible pass, unsettled.
-        break;
+        // The composition's own concentration makes the set infeasible. Step back towards the
+        // last feasible estimate (halving in ln n); if no step is feasible, no self-consistent
+        // composition was found: the set is reported infeasible at the composition's own
+        // concentration, so the diagnosis names what that concentration leaves short.
+        let found = false;
+        for (const t of [0.5, 0.25, 0.125]) {
+          const between = interpolate(damped, estimate, t);
+          const mb = build(between);
+          const sb = solveSet(mb, local);
+          if (sb.status === 'optimal') {
+            m = mb;
+            s = sb;
+            found = true;
+            break;
+          }
+        }
+        if (!found) {
+          model = m;
+          solution = s;
+          lastChange = 0;
+          break;
+        }
+        previousStep = null;
+        estimate = m.estimate;
+        model = m;
+        solution = s;
+        continue;
       }
       estimate = damped;
       model = m;
@@ -134,6 +178,16 @@ export function solveSetIterated(
   }
   if (counter) counter.count += local.count;
   return { set, model, solution, iterations, settled, lastRelativeChange: lastChange, lpsSolved: local.count };
+}
+
+/** The estimate a fraction t of the way from `to` back to `from` (in ln n; linear in w_s); an infinite n counts as 100× the other. */
+function interpolate(to: ConcentrationEstimate, from: ConcentrationEstimate, t: number): ConcentrationEstimate {
+  const nTo = to.nH2O_per_mol;
+  const nFrom = Number.isFinite(from.nH2O_per_mol) ? from.nH2O_per_mol : 100 * nTo;
+  return {
+    nH2O_per_mol: Math.exp((1 - t) * Math.log(nTo) + t * Math.log(nFrom)),
+    soluteMassFraction: (1 - t) * to.soluteMassFraction + t * from.soluteMassFraction,
+  };
 }
 
 function relativeChange(a: ConcentrationEstimate, b: ConcentrationEstimate): number {

@@ -103,7 +103,7 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
     ...(runOptions.isCancelled ?? input.isCancelled ? { isCancelled: runOptions.isCancelled ?? input.isCancelled } : {}),
   };
   const brief: Brief = briefSchema.parse(input.brief);
-  const port = options.port ?? fastPort(chemistryPort(input.chemistry), input.chemistry);
+  const port = options.port ?? portFor(input.chemistry);
   const ctx = thermalContext(brief, options.extraCaps ?? []);
   const verifyTop = Math.max(0, options.verifyTop ?? 20);
   const counter: LpCounter = { count: 0 };
@@ -227,6 +227,22 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
     warnings: runWarnings,
     ...(options.keepSolvedSets ? { solvedSets } : {}),
   };
+}
+
+const ports = new WeakMap<ChemistryLibrary, ChemistryPort>();
+
+/**
+ * One chemistry port per library object, reused by later runs in the same process: the port
+ * samples each solute's curves on first use (tens to hundreds of ms per solute), and a memo
+ * keyed by the (read-only) library changes no result.
+ */
+function portFor(lib: ChemistryLibrary): ChemistryPort {
+  let p = ports.get(lib);
+  if (!p) {
+    p = fastPort(chemistryPort(lib), lib);
+    ports.set(lib, p);
+  }
+  return p;
 }
 
 function unitOfObjective(ctx: ThermalContext): string {
