@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import type { Highs } from 'highs';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
 import { DEMO_BRIEFS, DEMO_LIBRARY } from '@shared/optimiser/demo-library';
 import { fastPort } from '@shared/optimiser/fast-port';
@@ -9,7 +9,7 @@ import { runOptimisation, type RunOptimisationOutput } from '@shared/optimiser/r
 import { toLpProblem } from '@shared/optimiser/solve-set';
 import type { BriefInput } from '@shared/schemas/briefs';
 import { chemistryPort } from '@shared/thermal/chemistry-adapter';
-import { highsModule, solveWithHighs } from './optimiser-highs';
+import { disposeHighsModel, highsModule, solveWithHighs } from './optimiser-highs';
 
 // Reference: HiGHS (npm `highs`, the HiGHS LP solver compiled to WebAssembly) solves exactly the
 // LP that javascript-lp-solver solved for every set; optima must agree within 1e-6 relative.
@@ -20,6 +20,7 @@ let highs: Highs;
 beforeAll(async () => {
   highs = await highsModule();
 });
+afterAll(disposeHighsModel);
 
 const REL = 1e-6;
 

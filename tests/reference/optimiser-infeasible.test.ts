@@ -1,5 +1,5 @@
 import type { Highs } from 'highs';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
 import { DEMO_LIBRARY } from '@shared/optimiser/demo-library';
 import { diagnoseInfeasible } from '@shared/optimiser/diagnose-infeasible';
@@ -8,7 +8,7 @@ import { rowValue } from '@shared/optimiser/linear-model';
 import { runOptimisation } from '@shared/optimiser/run-optimisation';
 import { toLpProblem } from '@shared/optimiser/solve-set';
 import { chemistryPort } from '@shared/thermal/chemistry-adapter';
-import { highsModule, solveWithHighs } from './optimiser-highs';
+import { disposeHighsModel, highsModule, solveWithHighs } from './optimiser-highs';
 
 const lib = defaultChemistryLibrary();
 const port = fastPort(chemistryPort(lib), lib);
@@ -16,6 +16,7 @@ let highs: Highs;
 beforeAll(async () => {
   highs = await highsModule();
 });
+afterAll(disposeHighsModel);
 
 /** A cold pack that must hold 5 °C for ten hours in still air within 60 g: no mixture can. */
 const impossible = {

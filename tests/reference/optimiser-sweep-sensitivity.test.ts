@@ -1,5 +1,5 @@
 import type { Highs } from 'highs';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
 import { DEMO_BRIEFS, DEMO_LIBRARY } from '@shared/optimiser/demo-library';
 import { fastPort } from '@shared/optimiser/fast-port';
@@ -7,7 +7,7 @@ import { runOptimisation } from '@shared/optimiser/run-optimisation';
 import { toLpProblem } from '@shared/optimiser/solve-set';
 import { sweepTarget } from '@shared/optimiser/sweep';
 import { chemistryPort } from '@shared/thermal/chemistry-adapter';
-import { highsModule, solveWithHighs } from './optimiser-highs';
+import { disposeHighsModel, highsModule, solveWithHighs } from './optimiser-highs';
 
 const lib = defaultChemistryLibrary();
 const port = fastPort(chemistryPort(lib), lib);
@@ -15,6 +15,7 @@ let highs: Highs;
 beforeAll(async () => {
   highs = await highsModule();
 });
+afterAll(disposeHighsModel);
 
 const compress = { ...DEMO_BRIEFS[0]!, maxActives: 2, allowedIngredientIds: ['urea', 'ammonium-nitrate', 'ammonium-chloride', 'sodium-bicarbonate', 'potassium-nitrate'] };
 
