@@ -188,7 +188,10 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
     const composition = w.iterated.model.coefficients.map((c, i) => ({ ingredient: c.ingredient, massG: w.iterated.solution.massesG[i] ?? 0 }));
     const v = verifyComposition(port, brief, composition, options.verifyRtol !== undefined ? { rtol: options.verifyRtol } : {});
     const { profile, ...verification } = v;
-    if (profile) addWarnings(profile.warnings, w.candidate.setNames.join(' + '));
+    if (profile) {
+      addWarnings(profile.warnings, w.candidate.setNames.join(' + '));
+      w.candidate.warnings = dedupeWarnings([...w.candidate.warnings, ...profile.warnings]);
+    }
     applyVerification(w, verification);
     if (options.sensitivity !== false) {
       w.candidate.sensitivity = sensitivityOf(w.iterated.model, w.iterated.solution.binding, w.iterated.solution.objectiveValue, counter);
@@ -337,8 +340,14 @@ function toWorking(it: IteratedSet, ctx: ThermalContext): Working {
     hazardScore: 0,
     sensitivity: [],
     enthalpyIteration: { iterations: it.iterations, settled: it.settled, lastRelativeChange: it.lastRelativeChange },
-    warnings: [],
+    warnings: dedupeWarnings(m.coefficients.flatMap((c) => c.warnings.map((w) => ({ code: w.code, message: `${c.ingredient.name}: ${w.message}` })))),
   };
+  if (!it.settled) {
+    candidate.warnings.push({
+      code: 'optimiser.enthalpy-not-settled',
+      message: `the enthalpy-of-solution iteration stopped after ${it.iterations} passes with a last relative change of ${it.lastRelativeChange.toExponential(1)}; figures are from the last pass`,
+    });
+  }
   return {
     key: m.set.key,
     objectiveValue: candidate.objectiveValue,
@@ -354,6 +363,12 @@ function toWorking(it: IteratedSet, ctx: ThermalContext): Working {
     candidate,
     effectiveKey: effectiveActives.join('+'),
   };
+}
+
+function dedupeWarnings(ws: readonly OptimiserWarning[]): OptimiserWarning[] {
+  const seen = new Map<string, OptimiserWarning>();
+  for (const w of ws) if (!seen.has(`${w.code}|${w.message}`)) seen.set(`${w.code}|${w.message}`, { code: w.code, message: w.message });
+  return [...seen.values()];
 }
 
 function applyVerification(w: Working, v: Verification): void {
