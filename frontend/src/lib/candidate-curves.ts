@@ -8,6 +8,22 @@ import { api } from './api-client';
 /** A temperature curve, °C against minutes. */
 export type Curve = { tMin: number; tempC: number }[];
 
+/** A curve at evenly spaced times by linear interpolation, so several curves share the table's rows. */
+export function resampleCurve(curve: Curve, stepMin: number, endMin: number): { x: number; y: number }[] {
+  if (curve.length === 0) return [];
+  const out: { x: number; y: number }[] = [];
+  let k = 0;
+  for (let t = 0; t <= endMin + 1e-9; t += stepMin) {
+    while (k < curve.length - 2 && curve[k + 1]!.tMin < t) k++;
+    const a = curve[k]!;
+    const b = curve[Math.min(k + 1, curve.length - 1)]!;
+    const f = b.tMin === a.tMin ? 0 : Math.min(1, Math.max(0, (t - a.tMin) / (b.tMin - a.tMin)));
+    if (t > curve[curve.length - 1]!.tMin + 1e-9) break;
+    out.push({ x: Number(t.toFixed(3)), y: a.tempC + f * (b.tempC - a.tempC) });
+  }
+  return out;
+}
+
 /** The evaluate endpoint's temperature limits, °C (shared/schemas/mixtures.ts). */
 const EVAL_MIN_C = -80;
 const EVAL_MAX_C = 400;

@@ -26,6 +26,11 @@ const TONE_COLOURS: Record<ChartTone, string> = {
 };
 const SERIES_TONES: ChartTone[] = ['frost', 'ember', 'ink', 'moss', 'amber', 'rust'];
 
+/** A series' stroke: its own colour (e.g. a categorical palette entry) or its tone's. */
+function colourOf(series: ChartSeries, index: number): string {
+  return series.colour ?? TONE_COLOURS[toneOf(series, index)];
+}
+
 function toneOf(series: ChartSeries, index: number): ChartTone {
   return series.tone ?? SERIES_TONES[index % SERIES_TONES.length]!;
 }
@@ -39,7 +44,7 @@ function nearest(points: readonly ChartPoint[], x: number): ChartPoint | null {
 }
 
 /** Width of the element, following resizes. */
-function useWidth<T extends HTMLElement>(fallback: number) {
+export function useWidth<T extends HTMLElement>(fallback: number) {
   const ref = useRef<T>(null);
   const [width, setWidth] = useState(fallback);
   useEffect(() => {
@@ -121,7 +126,7 @@ export function LineChart({
       ? null
       : {
           x: activeX,
-          values: series.map((s, i) => ({ series: s, tone: toneOf(s, i), point: nearest(s.points, activeX) })),
+          values: series.map((s, i) => ({ series: s, colour: colourOf(s, i), point: nearest(s.points, activeX) })),
         };
 
   const onPointerMove = (event: PointerEvent<SVGRectElement>) => {
@@ -261,7 +266,7 @@ export function LineChart({
             {/* Series. */}
             <g clipPath={`url(#${CSS.escape(id)}-clip)`}>
               {series.map((s, i) => {
-                const colour = TONE_COLOURS[toneOf(s, i)];
+                const colour = colourOf(s, i);
                 return s.pointsOnly ? (
                   <g key={s.id}>
                     {s.points.map((p, k) => (
@@ -299,7 +304,7 @@ export function LineChart({
                         cy={y(v.point.y)}
                         r={4.5}
                         fill="white"
-                        stroke={TONE_COLOURS[v.tone]}
+                        stroke={v.colour}
                         strokeWidth={2.5}
                       />
                     ),
@@ -335,7 +340,7 @@ export function LineChart({
             </p>
             {readout.values.map((v) => (
               <p key={v.series.id} className="flex items-center gap-2 tabular-nums text-ink-700">
-                <span aria-hidden="true" className="inline-block size-2.5 rounded-full" style={{ background: TONE_COLOURS[v.tone] }} />
+                <span aria-hidden="true" className="inline-block size-2.5 rounded-full" style={{ background: v.colour }} />
                 {v.series.label}: {v.point ? withUnit(formatY(v.point.y), yAxis.unit) : '—'}
               </p>
             ))}
@@ -358,7 +363,7 @@ export function LineChart({
               <span
                 aria-hidden="true"
                 className="inline-block h-0.5 w-5"
-                style={{ background: TONE_COLOURS[toneOf(s, i)], opacity: s.dashed ? 0.6 : 1 }}
+                style={{ background: colourOf(s, i), opacity: s.dashed ? 0.6 : 1 }}
               />
               {s.label}
             </li>

@@ -17,6 +17,8 @@ export type ChartSeries = {
   label: string;
   points: readonly ChartPoint[];
   tone?: ChartTone;
+  /** A CSS colour that wins over `tone`, e.g. from the categorical palette (palette.ts). */
+  colour?: string;
   dashed?: boolean;
   /** Draw points only (a scatter), e.g. candidates on a trade-off plot. */
   pointsOnly?: boolean;
