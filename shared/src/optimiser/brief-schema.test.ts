@@ -4,7 +4,7 @@ import { briefSchema, updateBriefRequestSchema } from '../schemas/briefs';
 describe('briefSchema', () => {
   it('fills the defaults of a sideline cold compress from a name alone', () => {
     const b = briefSchema.parse({ name: 'Compress' });
-    expect(b).toMatchObject({ packType: 'cold', ambientC: 25, initialTempC: 25, targetTempC: 5, bandK: 2, holdMin: 20, minSurfaceTempC: 0, maxSurfaceTempC: null, objective: 'least-cost', maxActives: 2, maxUnitCost: null });
+    expect(b).toMatchObject({ packType: 'cold', ambientC: 25, initialTempC: 25, targetTempC: 5, bandK: 2, holdMin: 20, minSurfaceTempC: null, maxSurfaceTempC: null, objective: 'least-cost', maxActives: 2, maxUnitCost: null });
     expect(b.packaging).toEqual({ massG: 12, heatCapacityJPerK: 24, cost: '0.08' });
   });
 

@@ -87,8 +87,13 @@ export const BRIEF_DEFAULTS = {
   cold: {
     /** A cold compress should get to 5 °C or colder (common first-aid practice: 0–10 °C at the skin). */
     targetTempC: 5,
-    /** Not colder than 0 °C against the skin (common practice to avoid cold injury; local codes decide). */
-    minSurfaceTempC: 0,
+    /**
+     * No floor by default: the optimiser's floor row is adiabatic (conservative), and with a
+     * floor a few kelvin under the target no fill can also pay for the heat leaking in over a
+     * hold. A designer who needs a floor (a medicine insert that must not freeze) sets one;
+     * cold-injury cautions for skin contact come with the hazard notes.
+     */
+    minSurfaceTempC: null,
     maxSurfaceTempC: null,
   },
   warm: {
@@ -142,7 +147,7 @@ const briefFields = {
   maxMassG: z.number({ error: 'must be a number of grams' }).positive('must be greater than 0').max(100000, 'must be at most 100 kg').default(BRIEF_DEFAULTS.maxMassG),
   /** Most cost per unit (fill and packaging), workspace currency; null: no limit. */
   maxUnitCost: moneySchema.nullable().default(null),
-  /** Coldest surface temperature allowed, °C; null: none. Default 0 °C for cold packs. */
+  /** Coldest surface temperature allowed, °C; null: none (the default). */
   minSurfaceTempC: temp('minSurfaceTempC').nullable().optional(),
   /** Warmest surface temperature allowed, °C; null: none. Default 44 °C for warm packs. */
   maxSurfaceTempC: temp('maxSurfaceTempC').nullable().optional(),
@@ -226,8 +231,8 @@ export function briefRuleErrors(b: Brief): { field: string; message: string }[] 
 
 /**
  * A brief as created by a designer: everything but the name has a default (a sideline cold
- * compress: ambient and initial 25 °C, ≤ 5 °C within 5 min, band 2 K, held 20 min, in still
- * air, 0.03 m², ≤ 400 g, no cost limit, not below 0 °C, no gas, least cost, up to
+ * compress: ambient and initial 25 °C, ≤ 5 °C within 5 min, band 2 K, held 20 min, on skin through
+* fabric, 0.03 m², ≤ 400 g, no cost limit, no surface floor, no gas, least cost, up to
  * 2 actives, 12 g / 24 J/K / 0.08 packaging). The output is a complete {@link Brief}.
  *
  * @example briefSchema.parse({ name: 'Sideline compress' }).targetTempC // → 5
