@@ -232,7 +232,7 @@ export function briefRuleErrors(b: Brief): { field: string; message: string }[] 
 /**
  * A brief as created by a designer: everything but the name has a default (a sideline cold
  * compress: ambient and initial 25 °C, ≤ 5 °C within 5 min, band 2 K, held 20 min, on skin through
-* fabric, 0.03 m², ≤ 400 g, no cost limit, no surface floor, no gas, least cost, up to
+ * fabric, 0.03 m², ≤ 400 g, no cost limit, no surface floor, no gas, least cost, up to
  * 2 actives, 12 g / 24 J/K / 0.08 packaging). The output is a complete {@link Brief}.
  *
  * @example briefSchema.parse({ name: 'Sideline compress' }).targetTempC // → 5
