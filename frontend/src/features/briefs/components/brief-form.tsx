@@ -207,9 +207,10 @@ export function BriefForm({
             <Num form={form} name="maxSurfaceTempC" label="Warmest surface (°C)" hint="Empty: no limit." empty={null} />
           </div>
           <p className="text-caption text-ink-500">
-            Surface limits default to common first-aid practice (not below 0 °C for cold packs, not above 44 °C for warm ones
-            held against skin). They are a starting point: local codes, the current safety data sheets and qualified review
-            decide what is safe for the people who will use the pack.
+            Warm packs default to at most 44 °C at the surface, where prolonged skin contact can start to burn; cold packs have
+            no floor unless you set one (a medicine insert that must not freeze, say). For packs against skin, the hazard notes
+            carry the cold-injury and burn cautions; local codes, the current safety data sheets and qualified review decide what
+            is safe for the people who will use the pack.
           </p>
         </Section>
 
