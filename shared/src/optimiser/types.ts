@@ -3,7 +3,7 @@ import type { IngredientProcessInput } from '../thermal/process';
 /**
  * An ingredient as the optimiser needs it. The back end maps its ingredient records to this
  * (id → string, costPerKg decimal string kept as is, process JSON, role); the demo library
- * (demo-library.ts) is written in this shape directly.
+ * (demo-library.ts, from shared/src/demo/ingredients.ts) is mapped to this shape.
  */
 export interface OptimiserIngredient {
   id: string;
