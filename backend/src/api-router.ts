@@ -14,6 +14,8 @@ import { mixturesRouter } from './mixtures/mixtures.router';
 import { briefsRouter } from './briefs/briefs.router';
 import { runsRouter } from './runs/runs.router';
 import { candidatesRouter } from './candidates/candidates.router';
+import { candidateReviewsRouter, reviewsRouter } from './reviews/reviews.router';
+import { hazardsRouter, ingredientHazardsRouter } from './hazards/hazards.router';
 
 /** Every API module mounts here; each router checks its own session and role rules. */
 export const apiRouter = Router();
@@ -31,6 +33,10 @@ apiRouter.use('/mixtures', mixturesRouter);
 apiRouter.use('/briefs', briefsRouter);
 apiRouter.use('/runs', runsRouter);
 apiRouter.use('/candidates', candidatesRouter);
+apiRouter.use('/candidates', candidateReviewsRouter);
+apiRouter.use('/reviews', reviewsRouter);
+apiRouter.use('/ingredients', ingredientHazardsRouter);
+apiRouter.use('/hazards', hazardsRouter);
 
 let openApiDocument: ReturnType<typeof buildOpenApiDocument> | null = null;
 apiRouter.get('/openapi.json', (_req, res) => {

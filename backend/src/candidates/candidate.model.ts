@@ -15,6 +15,12 @@ export class CandidateRecord extends Model<InferAttributes<CandidateRecord>, Inf
   declare state: CreationOptional<string>;
   declare data: Candidate;
   declare version: CreationOptional<number>;
+  /** The version this one revises (reviews: a change after submission makes a new version). */
+  declare parentCandidateId: CreationOptional<number | null>;
+  declare revision: CreationOptional<number>;
+  /** Set on submission for review; the composition is frozen from then on. */
+  declare submittedAt: CreationOptional<Date | null>;
+  declare submittedById: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -32,6 +38,10 @@ CandidateRecord.init(
     state: { type: DataTypes.STRING(24), allowNull: false, defaultValue: 'proposed' },
     data: { type: DataTypes.JSONB, allowNull: false },
     version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+    parentCandidateId: { type: DataTypes.INTEGER, allowNull: true },
+    revision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+    submittedAt: { type: DataTypes.DATE, allowNull: true },
+    submittedById: { type: DataTypes.INTEGER, allowNull: true },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

@@ -5,3 +5,4 @@ export * from './mail';
 export * from './health';
 export * from './library';
 export * from './thermo';
+export * from './reviews';
