@@ -28,6 +28,7 @@ const envSchema = z.object({
   RUN_RETRY_LIMIT: z.coerce.number().int().min(0).max(10).default(2),
   RUN_POLLING_SECONDS: z.coerce.number().min(0.5).default(1),
   RUN_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(30),
+  RUN_QUEUE: z.string().regex(/^[\w.-]{1,60}$/, 'RUN_QUEUE must be letters, digits, . _ or -').default('optimisation-run'),
 });
 
 export type AppConfig = ReturnType<typeof loadConfig>;
@@ -79,6 +80,8 @@ function loadConfig() {
       retryLimit: env.RUN_RETRY_LIMIT,
       pollingSeconds: env.RUN_POLLING_SECONDS,
       maintenanceSeconds: env.RUN_MAINTENANCE_SECONDS,
+      /** Name of the pg-boss queue; environments sharing a database can keep their runs apart. */
+      queueName: env.RUN_QUEUE,
     },
   };
 }

@@ -2,7 +2,7 @@ import PgBoss from 'pg-boss';
 import { config } from '../config';
 
 /** One pg-boss queue carries optimisation runs; any number of worker processes may serve it. */
-export const RUN_QUEUE = 'optimisation-run';
+export const RUN_QUEUE = config.runs.queueName;
 
 export interface RunJobData {
   runId: number;
