@@ -13,13 +13,15 @@ export interface HeatExchange {
  * when given, else the thermal model's contact case (thermal/contact.ts: convection plus
  * linearised radiation in still air; fabric and tissue in series to the skin on one face;
  * insulation in series) over the brief's `packAreaM2`. The linear model and the verification
- * use the same figures.
+ * use the same figures. `uaMultiplier` is an applied calibration of the contact case (not
+ * applied to a UA the brief gives directly).
  *
  * @example resolveHeatExchange({ uaWPerK: null, contact: 'still-air', packAreaM2: 0.03, ambientC: 25 }).uaWPerK // ≈ 0.28
  */
-export function resolveHeatExchange(brief: Pick<Brief, 'uaWPerK' | 'contact' | 'packAreaM2' | 'ambientC'>): HeatExchange {
+export function resolveHeatExchange(brief: Pick<Brief, 'uaWPerK' | 'contact' | 'packAreaM2' | 'ambientC'>, uaMultiplier = 1): HeatExchange {
   if (brief.uaWPerK !== null && brief.uaWPerK !== undefined) return { uaWPerK: brief.uaWPerK, envTempC: brief.ambientC };
   const thermalCase = brief.contact === 'skin-through-fabric' ? 'skin-fabric' : brief.contact;
   const c = contactUA({ case: thermalCase, geometry: { areaM2: brief.packAreaM2 } }, brief.ambientC);
-  return { uaWPerK: c.uaWPerK, envTempC: c.envTempC };
+  // A lab calibration of the contact case scales the modelled UA (lab-logs/calibrations.ts).
+  return { uaWPerK: c.uaWPerK * uaMultiplier, envTempC: c.envTempC };
 }

@@ -77,9 +77,9 @@ export interface ThermalContext {
  *
  * @example thermalContext(briefSchema.parse({ name: 'x' })).uaWPerK // ≈ 0.28 (still air, about 9.4 W/(m²·K) × 0.03 m²)
  */
-export function thermalContext(brief: Brief, extraCaps: readonly ConcentrationCap[] = []): ThermalContext {
+export function thermalContext(brief: Brief, extraCaps: readonly ConcentrationCap[] = [], uaMultiplier = 1): ThermalContext {
   const sign = brief.packType === 'cold' ? 1 : -1;
-  const exchange = resolveHeatExchange(brief);
+  const exchange = resolveHeatExchange(brief, uaMultiplier);
   return {
     packType: brief.packType,
     sign,

@@ -32,6 +32,7 @@ import { sensitivityOf } from './sensitivity';
 import type { LpCounter } from './solve-set';
 import type { OptimiserIngredient, OptimiserWarning } from './types';
 import { verifyComposition } from './verify';
+import { applyIngredientCalibrations, enthalpyFactorsBySolute, scaledEnthalpyPort, type ModelCalibrations } from '../lab-logs/calibrations';
 
 export interface RunOptimisationInput {
   /** A brief (parsed, or as written: it is parsed with briefSchema, defaults applied). */
@@ -43,6 +44,8 @@ export interface RunOptimisationInput {
   onProgress?: (done: number, total: number) => void;
   /** Same as `options.isCancelled`. */
   isCancelled?: () => boolean;
+  /** Applied lab calibrations (lab-logs/calibrations.ts): UA per contact case, rate constants and enthalpy factors per ingredient. */
+  calibrations?: ModelCalibrations | null;
 }
 
 export interface RunOptimisationOptions {
@@ -103,8 +106,11 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
     ...(runOptions.isCancelled ?? input.isCancelled ? { isCancelled: runOptions.isCancelled ?? input.isCancelled } : {}),
   };
   const brief: Brief = briefSchema.parse(input.brief);
-  const port = options.port ?? portFor(input.chemistry);
-  const ctx = thermalContext(brief, options.extraCaps ?? []);
+  const calibrations = input.calibrations ?? null;
+  if (calibrations) input = { ...input, ingredients: applyIngredientCalibrations(input.ingredients, calibrations) };
+  const port = scaledEnthalpyPort(options.port ?? portFor(input.chemistry), enthalpyFactorsBySolute(input.ingredients, calibrations));
+  const uaMultiplier = brief.uaWPerK === null || brief.uaWPerK === undefined ? (calibrations?.contacts?.[brief.contact]?.uaMultiplier ?? 1) : 1;
+  const ctx = thermalContext(brief, options.extraCaps ?? [], uaMultiplier);
   const verifyTop = Math.max(0, options.verifyTop ?? 20);
   const counter: LpCounter = { count: 0 };
   const warnings = new Map<string, OptimiserWarning>();
@@ -186,7 +192,7 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
       break;
     }
     const composition = w.iterated.model.coefficients.map((c, i) => ({ ingredient: c.ingredient, massG: w.iterated.solution.massesG[i] ?? 0 }));
-    const v = verifyComposition(port, brief, composition, options.verifyRtol !== undefined ? { rtol: options.verifyRtol } : {});
+    const v = verifyComposition(port, brief, composition, { ...(options.verifyRtol !== undefined ? { rtol: options.verifyRtol } : {}), uaMultiplier });
     const { profile, ...verification } = v;
     if (profile) {
       addWarnings(profile.warnings, w.candidate.setNames.join(' + '));

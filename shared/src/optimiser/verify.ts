@@ -30,6 +30,8 @@ export function verificationHorizonMin(brief: Pick<Brief, 'reachWithinMin' | 'ho
 export interface VerifyOptions {
   /** Relative tolerance of the time model's integrator (default 1e-5: verification needs ~0.01 K). */
   rtol?: number;
+  /** Calibration of the brief's contact case (default 1). */
+  uaMultiplier?: number;
 }
 
 /**
@@ -58,7 +60,7 @@ export function verifyComposition(
         ...(c.ingredient.cpJPerGK ? { cp_J_per_gK: c.ingredient.cpJPerGK } : {}),
       },
     }));
-  const exchange = resolveHeatExchange(brief);
+  const exchange = resolveHeatExchange(brief, options.uaMultiplier ?? 1);
   const band = holdBand(brief);
   const horizon = verificationHorizonMin(brief);
   let profile: TimeProfileResult;

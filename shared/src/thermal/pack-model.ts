@@ -169,6 +169,11 @@ export interface PackModelOptions {
   packHeatCapacityJPerK?: number;
   /** Pack surface area, m²: the default O2 film area of air-oxidation processes. */
   packAreaM2?: number;
+  /**
+   * Multiplier on the pack's total heat capacity C(x) (default 1): how the uncertainty of the
+   * heat-capacity data is propagated (lab-logs/monte-carlo.ts). H(T, x) stays a state function.
+   */
+  heatCapacityFactor?: number;
 }
 
 export class PackModel {
@@ -182,6 +187,7 @@ export class PackModel {
   readonly waterBaseG: number;
   readonly totalMassG: number;
   readonly packHeatCapacityJPerK: number;
+  readonly heatCapacityFactor: number;
   readonly size: number;
   readonly iceIndex: number;
   private readonly offReaction: number;
@@ -223,6 +229,10 @@ export class PackModel {
     this.waterBaseG = water;
     this.totalMassG = total;
     this.packHeatCapacityJPerK = options.packHeatCapacityJPerK ?? 0;
+    this.heatCapacityFactor = options.heatCapacityFactor ?? 1;
+    if (!(Number.isFinite(this.heatCapacityFactor) && this.heatCapacityFactor > 0)) {
+      throw new ThermalModelError(`expected heatCapacityFactor > 0, found ${this.heatCapacityFactor}`, { field: 'heatCapacityFactor' });
+    }
     if (!(Number.isFinite(this.packHeatCapacityJPerK) && this.packHeatCapacityJPerK >= 0)) {
       throw new ThermalModelError(`expected packHeatCapacityJPerK ≥ 0 J/K, found ${this.packHeatCapacityJPerK}`, {
         field: 'packHeatCapacityJPerK',
@@ -596,14 +606,15 @@ export class PackModel {
     parts.ice = ice * ICE_CP_J_PER_GK;
     for (const m of this.inerts) parts.inert += m.massG * m.cpJPerGK;
     const c =
-      parts.solution +
-      parts.undissolvedSolids +
-      parts.ice +
-      parts.reactionSolids +
-      parts.melt +
-      parts.metalAndOxide +
-      parts.inert +
-      parts.packaging;
+      (parts.solution +
+        parts.undissolvedSolids +
+        parts.ice +
+        parts.reactionSolids +
+        parts.melt +
+        parts.metalAndOxide +
+        parts.inert +
+        parts.packaging) *
+      this.heatCapacityFactor;
     return { chemJ: chem, cJPerK: c, parts };
   }
 

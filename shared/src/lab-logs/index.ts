@@ -1,0 +1,7 @@
+/** Lab logs: reading logger CSVs, measured against predicted, calibration and Monte Carlo confidence. */
+export * from './parse-log';
+export * from './overlay';
+export * from './scenario';
+export * from './calibrations';
+export * from './calibrate';
+export * from './monte-carlo';
