@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute } from 'sequelize';
-import type { IngredientRole } from '@shared/schemas';
+import type { IngredientNeed, IngredientRole } from '@shared/schemas';
 import type { IngredientHazardData } from '@shared/schemas/hazards';
 import type { IngredientProcess } from '@shared/thermal/process';
 import { sequelize } from '../db/sequelize';
@@ -21,6 +21,8 @@ export class IngredientRecord extends Model<InferAttributes<IngredientRecord>, I
   declare cpJPerGK: CreationOptional<number | null>;
   declare sources: CreationOptional<string[]>;
   declare notes: CreationOptional<string>;
+  /** Ingredients of the same workspace this one needs beside it, g per g of it (migration 0004). */
+  declare needs: CreationOptional<IngredientNeed[]>;
   declare version: CreationOptional<number>;
   /** GHS classification, ATE, incompatibility groups and regulatory flags (ingredientHazardDataSchema); null until a chemist enters them. */
   declare hazardData: CreationOptional<IngredientHazardData | null>;
@@ -49,6 +51,7 @@ IngredientRecord.init(
     cpJPerGK: { type: DataTypes.DOUBLE, allowNull: true, field: 'cp_j_per_g_k' },
     sources: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
     notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+    needs: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
     version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     hazardData: { type: DataTypes.JSONB, allowNull: true },
     hazardVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },

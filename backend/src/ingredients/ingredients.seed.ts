@@ -1,6 +1,6 @@
 import { Op, col, fn, where as sqlWhere } from 'sequelize';
 import { DEMO_INGREDIENTS, HARBOUR_INGREDIENTS, type DemoIngredient } from '@shared/demo/ingredients';
-import { createIngredientRequestSchema, ingredientRuleErrors, type CreateIngredientRequest } from '@shared/schemas';
+import { createIngredientRequestSchema, ingredientNeedsSchema, ingredientRuleErrors, type CreateIngredientRequest } from '@shared/schemas';
 import type { z } from 'zod';
 import { registerSeedStep } from '../db/seed';
 import { workspaceChemistryLibrary } from '../species/species.service';
@@ -28,6 +28,7 @@ export function demoIngredientRequest(item: DemoIngredient): z.input<typeof crea
 
 async function seedLibrary(workspaceId: number, currency: string, items: readonly DemoIngredient[]) {
   const lib = await workspaceChemistryLibrary(workspaceId);
+  const idByKey = new Map<string, number>();
   for (const item of items) {
     const parsed: CreateIngredientRequest = createIngredientRequestSchema.parse(demoIngredientRequest(item));
     const values = valuesFromCreate(parsed, currency);
@@ -37,7 +38,20 @@ async function seedLibrary(workspaceId: number, currency: string, items: readonl
       where: { [Op.and]: [{ workspaceId }, sqlWhere(fn('lower', col('name')), values.name.toLowerCase()), sqlWhere(fn('lower', col('grade')), values.grade.toLowerCase())] },
       paranoid: false,
     });
-    if (!existing) await IngredientRecord.create({ ...values, workspaceId });
+    idByKey.set(item.key, existing ? existing.id : (await IngredientRecord.create({ ...values, workspaceId })).id);
+  }
+  // Needs name other records, so they are filled once every record has its id; a record whose
+  // needs someone already set is left as it is.
+  for (const item of items) {
+    if (!item.needs?.length) continue;
+    const needs = item.needs.map((n) => {
+      const ingredientId = idByKey.get(n.key);
+      if (ingredientId === undefined) throw new Error(`Demo ingredient ${item.name} (${item.grade}) needs "${n.key}", which this library does not hold.`);
+      return { ingredientId, minGPerG: n.minGPerG, ...(n.maxGPerG !== undefined ? { maxGPerG: n.maxGPerG } : {}), ...(n.source ? { source: n.source } : {}) };
+    });
+    const parsed = ingredientNeedsSchema.parse(needs);
+    const row = await IngredientRecord.findByPk(idByKey.get(item.key)!, { paranoid: false });
+    if (row && (row.needs ?? []).length === 0) await row.update({ needs: parsed });
   }
 }
 

@@ -6,6 +6,7 @@ import {
   type CreateIngredientRequest,
   type FieldError,
   type Ingredient,
+  type IngredientNeed,
   type IngredientListQuery,
   type UpdateIngredientRequest,
 } from '@shared/schemas';
@@ -40,6 +41,7 @@ export function toIngredientDto(r: IngredientRecord): Ingredient {
     cpJPerGK: r.cpJPerGK ?? null,
     sources: r.sources ?? [],
     notes: r.notes ?? '',
+    needs: r.needs ?? [],
     version: r.version,
     createdBy: r.createdBy?.name ?? null,
     updatedBy: r.updatedBy?.name ?? null,
@@ -141,6 +143,8 @@ type IngredientValues = {
   cpJPerGK: number | null;
   sources: string[];
   notes: string;
+  /** Left out: the column keeps what it has (a new record: none). */
+  needs?: IngredientNeed[];
 };
 
 /** A parsed create request with the defaults of a new ingredient filled in. */
@@ -159,7 +163,24 @@ export function valuesFromCreate(input: CreateIngredientRequest, defaultCurrency
     cpJPerGK: input.cpJPerGK ?? null,
     sources: input.sources ?? [],
     notes: input.notes ?? '',
+    ...(input.needs ? { needs: input.needs } : {}),
   };
+}
+
+/**
+ * Needs name live ingredients of the same workspace, never the ingredient itself; the ratios
+ * were checked by the schema. Another workspace's id reads as unknown.
+ */
+export async function needsErrors(workspaceId: number, needs: IngredientNeed[] | undefined, selfId?: number, transaction?: Transaction): Promise<FieldError[]> {
+  if (!needs?.length) return [];
+  const ids = [...new Set(needs.map((n) => n.ingredientId))];
+  const found = new Set((await IngredientRecord.findAll({ where: { workspaceId, id: ids }, attributes: ['id'], transaction })).map((r) => r.id));
+  const errors: FieldError[] = [];
+  needs.forEach((n, k) => {
+    if (selfId !== undefined && n.ingredientId === selfId) errors.push({ field: `needs.${k}.ingredientId`, message: 'an ingredient cannot need itself' });
+    else if (!found.has(n.ingredientId)) errors.push({ field: `needs.${k}.ingredientId`, message: `is not an ingredient of this library (id ${n.ingredientId})` });
+  });
+  return errors;
 }
 
 function duplicateName(): AppError {
@@ -174,7 +195,7 @@ function duplicateName(): AppError {
 export async function createIngredient(actor: AuthUser, input: CreateIngredientRequest): Promise<Ingredient> {
   const values = valuesFromCreate(input, actor.workspace.currency);
   const lib = await workspaceChemistryLibrary(actor.workspaceId);
-  const errors = referenceErrors(lib, values);
+  const errors = [...referenceErrors(lib, values), ...(await needsErrors(actor.workspaceId, values.needs))];
   if (errors.length) throw AppError.validation(`Invalid ingredient: ${errors.map((e) => `${e.field} ${e.message}`).join('; ')}`, errors);
   try {
     return await sequelize.transaction(async (transaction) => {
@@ -207,8 +228,9 @@ export async function updateIngredient(actor: AuthUser, id: number, change: Upda
         cpJPerGK: fields.cpJPerGK === undefined ? (row.cpJPerGK ?? null) : fields.cpJPerGK,
         sources: fields.sources ?? row.sources,
         notes: fields.notes ?? row.notes,
+        needs: fields.needs ?? row.needs ?? [],
       };
-      const errors = [...ingredientRuleErrors(merged), ...referenceErrors(lib, merged)];
+      const errors = [...ingredientRuleErrors(merged), ...referenceErrors(lib, merged), ...(await needsErrors(actor.workspaceId, fields.needs, row.id, transaction))];
       if (errors.length) throw AppError.validation(`Invalid ingredient: ${errors.map((e) => `${e.field} ${e.message}`).join('; ')}`, errors);
       const before = snapshot(row);
       await row.update({ ...merged, version: row.version + 1, updatedById: actor.id }, { transaction });

@@ -36,7 +36,14 @@ export function toCandidateDto(c: CandidateRecord): CandidateDto {
 
 /** Maps a library record to what the optimiser reads; the version is kept for the snapshot. */
 export function toOptimiserIngredient(r: IngredientRecord): OptimiserIngredient & { version: number } {
-  const extra = r as unknown as { needs?: OptimiserIngredient['needs']; hazardClasses?: string[] };
+  const extra = r as unknown as { hazardClasses?: string[] };
+  // Library needs name other records by their numeric id; the optimiser's ids are strings.
+  const needs = (r.needs ?? []).map((n) => ({
+    ingredientId: String(n.ingredientId),
+    minGPerG: n.minGPerG,
+    ...(n.maxGPerG !== undefined ? { maxGPerG: n.maxGPerG } : {}),
+    ...(n.source ? { source: n.source } : {}),
+  }));
   return {
     id: String(r.id),
     name: r.grade ? `${r.name} (${r.grade})` : r.name,
@@ -45,7 +52,7 @@ export function toOptimiserIngredient(r: IngredientRecord): OptimiserIngredient 
     process: r.process,
     cpJPerGK: r.cpJPerGK,
     densityGPerMl: r.densityGPerMl,
-    ...(extra.needs ? { needs: extra.needs } : {}),
+    ...(needs.length ? { needs } : {}),
     ...(extra.hazardClasses ? { hazardClasses: extra.hazardClasses } : {}),
     version: r.version,
   };

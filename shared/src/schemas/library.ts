@@ -129,6 +129,37 @@ export const currencySchema = z
   .toUpperCase()
   .regex(/^[A-Z]{3}$/, 'must be a three-letter currency code such as EUR');
 
+const gPerG = (what: string) => z.number({ error: `${what} must be a number in g per g` }).min(0, `${what} must be 0 or more`).max(1000, `${what} must be at most 1000 g per g`);
+
+/**
+ * One ingredient another needs beside it, in grams per gram of the one that needs it (iron
+ * powder needs salt, carbon, a water-holding filler and water). `ingredientId` is an ingredient
+ * of the same workspace (the service checks); the ratios are ≥ 0 and max ≥ min when given.
+ */
+export const ingredientNeedSchema = z
+  .object({
+    ingredientId: z.number({ error: 'must be the id of an ingredient of this library' }).int('must be a whole number').positive('must be a positive id'),
+    minGPerG: gPerG('minGPerG'),
+    /** Absent: no upper ratio. */
+    maxGPerG: gPerG('maxGPerG').optional(),
+    /** Why (citation or common practice). */
+    source: z.string({ error: 'must be text' }).trim().max(500, 'must be at most 500 characters').optional(),
+  })
+  .refine((n) => n.maxGPerG === undefined || n.maxGPerG >= n.minGPerG, { message: 'must be at least minGPerG', path: ['maxGPerG'] });
+export type IngredientNeed = z.infer<typeof ingredientNeedSchema>;
+
+/** The needs of one ingredient: at most 20, each other ingredient named once. */
+export const ingredientNeedsSchema = z
+  .array(ingredientNeedSchema)
+  .max(20, 'at most 20 needs')
+  .superRefine((needs, ctx) => {
+    const seen = new Set<number>();
+    needs.forEach((n, k) => {
+      if (seen.has(n.ingredientId)) ctx.addIssue({ code: 'custom', message: 'names the same ingredient twice', path: [k, 'ingredientId'] });
+      seen.add(n.ingredientId);
+    });
+  });
+
 const ingredientFields = {
   name: z.string({ error: 'is required' }).trim().min(1, 'is required').max(120, 'must be at most 120 characters'),
   grade: z.string({ error: 'must be text' }).trim().max(120, 'must be at most 120 characters'),
@@ -146,6 +177,8 @@ const ingredientFields = {
   /** Citations (data sheets, handbooks) behind the figures. */
   sources: z.array(z.string().trim().min(1, 'must not be empty').max(500, 'must be at most 500 characters')).max(20, 'at most 20 sources'),
   notes: z.string({ error: 'must be text' }).max(4000, 'must be at most 4000 characters'),
+  /** Other ingredients of this library it needs beside it, g per g of it. */
+  needs: ingredientNeedsSchema,
 };
 
 type IngredientRuleInput = {
@@ -188,6 +221,7 @@ export const createIngredientRequestSchema = z
     cpJPerGK: ingredientFields.cpJPerGK.optional(),
     sources: ingredientFields.sources.optional(),
     notes: ingredientFields.notes.optional(),
+    needs: ingredientFields.needs.optional(),
   })
   .superRefine(addRuleIssues);
 export type CreateIngredientRequest = z.infer<typeof createIngredientRequestSchema>;
@@ -206,6 +240,7 @@ export const updateIngredientRequestSchema = z
     cpJPerGK: ingredientFields.cpJPerGK.optional(),
     sources: ingredientFields.sources.optional(),
     notes: ingredientFields.notes.optional(),
+    needs: ingredientFields.needs.optional(),
     version: z.number({ error: 'is required' }).int().min(0),
   });
 export type UpdateIngredientRequest = z.infer<typeof updateIngredientRequestSchema>;
@@ -224,6 +259,7 @@ export const ingredientSchema = z.object({
   cpJPerGK: z.number().nullable(),
   sources: z.array(z.string()),
   notes: z.string(),
+  needs: z.array(ingredientNeedSchema),
   version: z.number(),
   createdBy: z.string().nullable(),
   updatedBy: z.string().nullable(),
