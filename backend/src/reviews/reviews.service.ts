@@ -1,4 +1,4 @@
-import { Op, type Transaction } from 'sequelize';
+import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import type { Brief } from '@shared/schemas/briefs';
 import type { CandidateRecord as CandidateDto } from '@shared/schemas/runs';
@@ -208,6 +208,10 @@ export async function reviseCandidate(actor: AuthUser, id: number, body: ReviseB
       transaction,
     );
     return { child: created, parent, from };
+  }).catch((error: unknown) => {
+    // Two revisions of one version raced: the unique parent index lets one through.
+    if (error instanceof UniqueConstraintError) throw AppError.conflict('This version has already been revised; revise the newest version.', 'already_revised');
+    throw error;
   });
   await notifyTransition({ actor, candidate: parent, from, to: 'shortlisted', comment: body.comment, kind: 'revised', newCandidateId: child.id });
   return { candidate: toCandidateDto(child), status: await reviewStatus(child) };

@@ -18,9 +18,10 @@ export async function up({ context: { queryInterface: qi } }: { context: Migrati
     await qi.addColumn('candidates', 'revision', { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 }, { transaction });
     await qi.addColumn('candidates', 'submitted_at', { type: DataTypes.DATE, allowNull: true }, { transaction });
     await qi.addColumn('candidates', 'submitted_by_id', { type: DataTypes.INTEGER, allowNull: true, references: { model: 'users', key: 'id' } }, { transaction });
-    // A revision keeps its run and set: uniqueness is per revision (a retried job still adds no duplicate).
+    // A revision keeps its run and set: the optimiser's own rows stay unique per run and set (a
+    // retried job adds no duplicate), revisions (with a parent) are not bound by it.
     await qi.removeConstraint('candidates', 'candidates_run_set_unique', { transaction });
-    await qi.addConstraint('candidates', { fields: ['run_id', 'set_key', 'revision'], type: 'unique', name: 'candidates_run_set_revision_unique', transaction });
+    await qi.sequelize.query('CREATE UNIQUE INDEX candidates_run_set_unique ON candidates (run_id, set_key) WHERE parent_candidate_id IS NULL', { transaction });
     // One revision per candidate: a second "revise" of the same version cannot slip in.
     await qi.sequelize.query('CREATE UNIQUE INDEX candidates_parent_unique ON candidates (parent_candidate_id) WHERE parent_candidate_id IS NOT NULL', { transaction });
     await qi.sequelize.query(
@@ -52,7 +53,7 @@ export async function down({ context: { queryInterface: qi } }: { context: Migra
     await qi.dropTable('reviews', { transaction });
     await qi.sequelize.query('ALTER TABLE candidates DROP CONSTRAINT IF EXISTS candidates_state_check', { transaction });
     await qi.sequelize.query('DROP INDEX IF EXISTS candidates_parent_unique', { transaction });
-    await qi.removeConstraint('candidates', 'candidates_run_set_revision_unique', { transaction });
+    await qi.sequelize.query('DROP INDEX IF EXISTS candidates_run_set_unique', { transaction });
     await qi.addConstraint('candidates', { fields: ['run_id', 'set_key'], type: 'unique', name: 'candidates_run_set_unique', transaction });
     for (const column of ['submitted_by_id', 'submitted_at', 'revision', 'parent_candidate_id']) await qi.removeColumn('candidates', column, { transaction });
     await qi.removeColumn('ingredients', 'hazard_version', { transaction });
