@@ -262,7 +262,7 @@ export function gasNotes(p: { gases: readonly GasEvolved[]; headspaceL: number; 
   const h2 = byGas('H2(g)');
   if (h2 > 0) {
     const x = (100 * h2) / (h2 + p.headspaceL);
-    const flammable = x >= HYDROGEN_LFL_PCT;
+    const flammable = x >= HYDROGEN_LFL_PCT - 1e-9; // rounding of V/(V + H) at exactly 4 %
     notes.push(
       note(
         flammable ? 'warning' : 'caution',

@@ -40,6 +40,11 @@ export interface MixtureClassificationOptions {
   bufferingShowsNotCorrosive?: boolean;
   /** Use acute-toxicity category 5 (UN GHS; not adopted in the EU CLP). Default false. */
   includeCategory5?: boolean;
+  /**
+   * Names of ingredients below 1 % to count as relevant all the same ("< 1 % where there is reason
+   * to suspect relevance", GHS 3.2.3.3.1 / 3.3.3.3.1; CLP 3.2.3.3.1).
+   */
+  alsoRelevant?: readonly string[];
   /** Sold to the general public: add P102 to a classified mixture's label. Default true. */
   consumerProduct?: boolean;
 }
@@ -235,7 +240,8 @@ const SKIN_CORR_SUB = ['1A', '1B', '1C'] as const;
  */
 export function classifyMixture(components: readonly MixtureComponent[], options: MixtureClassificationOptions = {}): MixtureClassification {
   const s = shares(components);
-  const relevant = s.filter((x) => x.pct >= RELEVANT_INGREDIENT_PCT);
+  const alsoRelevant = new Set(options.alsoRelevant ?? []);
+  const relevant = s.filter((x) => x.pct >= RELEVANT_INGREDIENT_PCT || (x.pct > 0 && alsoRelevant.has(x.name)));
   const includeCategory5 = options.includeCategory5 ?? false;
   const out: ClassifiedEntry[] = [];
   const notes: HazardNote[] = [];
