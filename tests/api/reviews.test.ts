@@ -279,6 +279,11 @@ describe('the whole path through the API: audit events, e-mails with working lin
     expect(dossier.body.curve.length).toBeGreaterThan(10);
     expect(dossier.body.signOffs.map((s: { stage: string }) => s.stage)).toEqual(['chemistry', 'chemistry', 'regulatory']);
     expect(dossier.body.standingCaution).toMatch(/do not replace local codes/);
+    expect(dossier.body.label).not.toBeNull();
+    for (const n of dossier.body.hazardNotes) expect(['info', 'caution', 'warning', 'blocker']).toContain(n.severity);
+    const hazards = await request(h.app).get(`/api/candidates/${v2.id}/hazards`).set(bearer(reviewer));
+    expect(hazards.status).toBe(200);
+    expect(hazards.body.hazards.notes).toEqual(dossier.body.hazardNotes);
     const a4 = await request(h.app).get(`/api/candidates/${v2.id}/dossier.pdf`).set(bearer(reviewer)).buffer(true).parse((res, cb) => {
       const chunks: Buffer[] = [];
       res.on('data', (c: Buffer) => chunks.push(c));

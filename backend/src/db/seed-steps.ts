@@ -2,3 +2,4 @@
 export {};
 import '../ingredients/ingredients.seed';
 import '../briefs/briefs.seed';
+import '../hazards/hazards.seed';

@@ -1,17 +1,40 @@
 import type { Brief } from '@shared/schemas/briefs';
-import type { CandidateHazards, IngredientHazardData } from '@shared/schemas/hazards';
+import type { IngredientHazardData } from '@shared/schemas/hazards';
+import type { IngredientProcessInput } from '@shared/thermal/process';
+import { candidateHazards, type CandidateHazardsResult } from '@shared/hazards';
+import type { SkinContact } from '@shared/hazards/hazard-notes';
 
 export interface HazardInputLine {
   name: string;
   role: string;
   massG: number;
   hazardData: IngredientHazardData | null;
+  process?: IngredientProcessInput | null;
+  densityGPerMl?: number | null;
+}
+
+/** How the brief's heat-exchange case meets the skin: through fabric when it says so; otherwise contact is possible. */
+export function skinContactOf(brief: Brief): SkinContact {
+  return brief.contact === 'skin-through-fabric' ? 'through-fabric' : 'possible';
 }
 
 /**
- * The computed hazards of a candidate (shared/src/hazards). Null until the mixture
- * classification is available for this composition.
+ * The computed hazards of a candidate (shared/src/hazards: GHS mixture classification, label
+ * elements, notes): its fill (packaging left out), the time model's coldest and warmest
+ * temperatures (the brief's start when the candidate was not simulated), the brief's hold as the
+ * contact time.
  */
-export function hazardsForCandidate(_lines: HazardInputLine[], _brief: Brief, _temps: { minTempC: number | null; maxTempC: number | null }): CandidateHazards | null {
-  return null;
+export function hazardsForCandidate(lines: HazardInputLine[], brief: Brief, temps: { minTempC: number | null; maxTempC: number | null }): CandidateHazardsResult {
+  return candidateHazards({
+    composition: lines
+      .filter((l) => l.massG > 0 && l.role !== 'packaging')
+      .map((l) => ({ name: l.name, massG: l.massG, hazardData: l.hazardData, process: l.process ?? null, densityGPerMl: l.densityGPerMl ?? null })),
+    predicted: {
+      minTempC: temps.minTempC ?? brief.initialTempC,
+      maxTempC: temps.maxTempC ?? brief.initialTempC,
+      contact: skinContactOf(brief),
+      holdMin: brief.holdMin,
+    },
+    packType: brief.packType,
+  });
 }

@@ -8,6 +8,7 @@ import { verifyComposition } from '@shared/optimiser/verify';
 import { chemistryPort } from '@shared/thermal';
 import type { OptimiserIngredient } from '@shared/optimiser/types';
 import { AppError } from '../http/errors';
+import type { CandidateRecord } from '../candidates/candidate.model';
 import { RunRecord } from '../runs/run.model';
 import { toCandidateDto, toOptimiserIngredient } from '../runs/runs.service';
 import { IngredientRecord } from '../ingredients/ingredient.model';
@@ -15,6 +16,38 @@ import { workspaceChemistryLibrary } from '../species/species.service';
 import { Workspace } from '../workspaces/workspace.model';
 import { findCandidate, reviewHistory } from './reviews.service';
 import { hazardsForCandidate } from './candidate-hazards';
+
+function hazardOf(r: IngredientRecord | undefined): IngredientHazardData | null {
+  if (!r?.hazardData) return null;
+  const parsed = ingredientHazardDataSchema.safeParse(r.hazardData);
+  return parsed.success ? parsed.data : null;
+}
+
+function hazardsFromRecords(candidate: CandidateRecord, brief: Brief, byId: Map<string, IngredientRecord>) {
+  return hazardsForCandidate(
+    candidate.data.composition.map((c) => {
+      const r = byId.get(c.ingredientId);
+      const process = r?.process ?? (r?.role === 'solvent' ? { kind: 'inert' as const, role: 'water' as const } : null);
+      return { name: r?.name ?? c.name, role: c.role, massG: c.massG, hazardData: hazardOf(r), process, densityGPerMl: r?.densityGPerMl ?? null };
+    }),
+    brief,
+    { minTempC: candidate.data.verification.minTempC ?? candidate.data.predictedMinTempC, maxTempC: candidate.data.verification.maxTempC ?? candidate.data.predictedMaxTempC },
+  );
+}
+
+/** The computed hazards of any candidate of the workspace (notes, classification, label, score), with the standing caution. */
+export async function candidateHazardsView(workspaceId: number, id: number) {
+  const candidate = await findCandidate(workspaceId, id);
+  const ids = candidate.data.composition.map((c) => Number(c.ingredientId));
+  const [run, records] = await Promise.all([
+    RunRecord.findOne({ where: { id: candidate.runId, workspaceId }, attributes: ['id', 'briefSnapshot'] }),
+    IngredientRecord.findAll({ where: { workspaceId, id: { [Op.in]: ids } }, paranoid: false }),
+  ]);
+  const byId = new Map(records.map((r) => [String(r.id), r]));
+  const h = hazardsFromRecords(candidate, run!.briefSnapshot as Brief, byId);
+  const missing = candidate.data.composition.filter((c) => c.massG > 0 && c.role !== 'packaging' && !hazardOf(byId.get(c.ingredientId))).map((c) => c.name);
+  return { hazards: { notes: h.notes, classification: h.classification, label: h.label, score: h.score }, standingCaution: HAZARD_STANDING_CAUTION, ingredientsWithoutHazardData: missing };
+}
 
 /**
  * Everything the printable dossier shows: composition with its sources, the predicted
@@ -40,11 +73,6 @@ export async function buildDossier(workspaceId: number, id: number): Promise<Dos
   const fill = candidate.data.composition.filter((c) => c.massG > 0);
   const fillMassG = fill.reduce((a, c) => a + c.massG, 0);
 
-  const hazardOf = (r: IngredientRecord | undefined): IngredientHazardData | null => {
-    if (!r?.hazardData) return null;
-    const parsed = ingredientHazardDataSchema.safeParse(r.hazardData);
-    return parsed.success ? parsed.data : null;
-  };
 
   const composition = candidate.data.composition.map((c) => {
     const r = byId.get(c.ingredientId);
@@ -72,11 +100,7 @@ export async function buildDossier(workspaceId: number, id: number): Promise<Dos
     curve = verified.profile?.curve.map((p) => ({ tMin: p.tMin, tempC: p.tempC })) ?? [];
   }
 
-  const hazards = hazardsForCandidate(
-    candidate.data.composition.map((c) => ({ name: c.name, role: c.role, massG: c.massG, hazardData: hazardOf(byId.get(c.ingredientId)) })),
-    brief,
-    { minTempC: candidate.data.predictedMinTempC, maxTempC: candidate.data.predictedMaxTempC },
-  );
+  const hazards = hazardsFromRecords(candidate, brief, byId);
 
   return {
     generatedAt: new Date().toISOString(),
@@ -87,9 +111,9 @@ export async function buildDossier(workspaceId: number, id: number): Promise<Dos
     composition,
     curve,
     band: holdBand(brief),
-    hazards,
-    hazardNotes: hazards?.notes ?? [],
-    label: hazards?.label ?? null,
+    hazards: { notes: hazards.notes, classification: hazards.classification, label: hazards.label, score: hazards.score },
+    hazardNotes: hazards.notes,
+    label: hazards.label,
     standingCaution: HAZARD_STANDING_CAUTION,
     history: history.events,
     signOffs: history.reviews.filter((r) => r.verdict === 'approved'),

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { idParamsSchema } from '@shared/schemas';
-import { dossierSchema, reviewDecisionRequestSchema, reviewHistoryResponseSchema, reviewQueueResponseSchema, reviewRecordSchema, reviseRequestSchema, submitRequestSchema, transitionResponseSchema } from '@shared/schemas/reviews';
+import { candidateHazardsResponseSchema, dossierSchema, reviewDecisionRequestSchema, reviewHistoryResponseSchema, reviewQueueResponseSchema, reviewRecordSchema, reviseRequestSchema, submitRequestSchema, transitionResponseSchema } from '@shared/schemas/reviews';
 import { documentRoute } from '../openapi/registry';
 
 documentRoute({ method: 'get', path: '/reviews', summary: 'Candidates waiting for the signed-in role, and those in or past review', tag: 'reviews', roles: 'any', response: reviewQueueResponseSchema });
@@ -10,3 +10,4 @@ documentRoute({ method: 'get', path: '/candidates/:id/reviews', summary: 'Review
 documentRoute({ method: 'post', path: '/candidates/:id/revise', summary: 'After changes were requested: a new version with an edited composition, re-checked by the time model, shortlisted', tag: 'reviews', roles: ['designer', 'admin'], params: idParamsSchema, body: reviseRequestSchema, response: transitionResponseSchema });
 documentRoute({ method: 'get', path: '/candidates/:id/dossier', summary: 'Everything the dossier page shows (in or past review; 409 before)', tag: 'reviews', roles: 'any', params: idParamsSchema, response: dossierSchema });
 documentRoute({ method: 'get', path: '/candidates/:id/dossier.pdf', summary: 'The dossier as a PDF (A4; ?paper=letter for US Letter)', tag: 'reviews', roles: 'any', params: idParamsSchema, query: z.object({ paper: z.enum(['a4', 'letter']).optional() }) });
+documentRoute({ method: 'get', path: '/candidates/:id/hazards', summary: "A candidate's computed hazards: GHS mixture classification, label elements, notes with severity, and the standing caution", tag: 'reviews', roles: 'any', params: idParamsSchema, response: candidateHazardsResponseSchema });

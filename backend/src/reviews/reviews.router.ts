@@ -7,7 +7,7 @@ import { requireAuth, requireRole } from '../auth/auth.middleware';
 import { AppError } from '../http/errors';
 import { validate, validated } from '../http/validate';
 import { decideReview, reviewHistory, reviewQueue, reviseCandidate, submitCandidate } from './reviews.service';
-import { buildDossier } from './dossier.service';
+import { buildDossier, candidateHazardsView } from './dossier.service';
 import { renderDossierPdf } from './dossier-pdf';
 import './reviews.openapi';
 
@@ -47,6 +47,11 @@ candidateReviewsRouter.get('/:id/reviews', validate({ params: idParamsSchema }),
 candidateReviewsRouter.post('/:id/revise', requireRole('designer', 'admin'), validate({ params: idParamsSchema, body: reviseRequestSchema }), async (req, res) => {
   const { params, body } = validated(res, { params: idParamsSchema, body: reviseRequestSchema });
   res.status(201).json(await reviseCandidate(req.user!, params.id, body));
+});
+
+candidateReviewsRouter.get('/:id/hazards', validate({ params: idParamsSchema }), async (req, res) => {
+  const { params } = validated(res, { params: idParamsSchema });
+  res.json(await candidateHazardsView(req.user!.workspaceId, params.id));
 });
 
 candidateReviewsRouter.get('/:id/dossier', validate({ params: idParamsSchema }), async (req, res) => {

@@ -296,7 +296,7 @@ export async function reviewHistory(workspaceId: number, id: number): Promise<{ 
 }
 
 async function queueFor(workspaceId: number, states: ReviewState[], extra: Record<string, unknown> = {}) {
-  const rows = await CandidateRecord.findAll({ where: { workspaceId, state: { [Op.in]: states }, ...extra }, order: [['updatedAt', 'ASC']], limit: 100 });
+  const rows = await CandidateRecord.findAll({ where: { workspaceId, state: { [Op.in]: states }, ...extra }, order: [['updatedAt', 'DESC'], ['id', 'DESC']], limit: 100 });
   const runs = await RunRecord.findAll({ where: { workspaceId, id: { [Op.in]: [...new Set(rows.map((r) => r.runId))] } }, attributes: ['id', 'briefSnapshot'] });
   const briefName = new Map(runs.map((r) => [r.id, (r.briefSnapshot as Brief).name]));
   const children = new Set(
@@ -326,7 +326,7 @@ export function statesWaitingOn(role: Role): ReviewState[] {
 export async function reviewQueue(user: AuthUser) {
   const waiting = await queueFor(user.workspaceId, statesWaitingOn(user.role));
   const recent = await queueFor(user.workspaceId, ['in-chemistry-review', 'in-regulatory-review', 'approved', 'changes-requested', 'rejected']);
-  return { role: user.role, waiting, recent: recent.reverse().slice(0, 50) };
+  return { role: user.role, waiting, recent: recent.slice(0, 50) };
 }
 
 registerWaitingProvider(['chemist'], async (user) => {

@@ -194,3 +194,11 @@ export const dossierSchema = z.object({
   signOffs: z.array(reviewRecordSchema),
 });
 export type Dossier = z.infer<typeof dossierSchema>;
+
+/** GET /api/candidates/:id/hazards: the computed hazards, the standing caution, and the ingredients that lack hazard data. */
+export const candidateHazardsResponseSchema = z.object({
+  hazards: candidateHazardsSchema,
+  standingCaution: z.string(),
+  ingredientsWithoutHazardData: z.array(z.string()),
+});
+export type CandidateHazardsResponse = z.infer<typeof candidateHazardsResponseSchema>;
