@@ -3,7 +3,7 @@ import { ingredientHazardDataSchema, type GhsClassification, type IngredientHaza
 /**
  * Hazard data of the demo ingredients, keyed by the demo ingredient names of the back end's seed
  * (backend/src/ingredients/ingredients.seed.ts) and, through {@link DEMO_HAZARD_DATA_BY_ID}, by
- * the ids of the optimiser's demo library (shared/src/optimiser/demo-library.ts).
+ * the stable keys of shared/src/demo/ingredients.ts (the optimiser's demo-library ids).
  *
  * Every entry was written FROM MEMORY of typical supplier safety data sheets and, where one
  * exists, the harmonised classification of CLP Annex VI; none was checked against a current
@@ -221,6 +221,9 @@ export const DEMO_HAZARD_NAME_BY_ID: Readonly<Record<string, string>> = {
   'activated-carbon': 'Activated carbon',
   vermiculite: 'Vermiculite',
   'barium-hydroxide-8h2o': 'Barium hydroxide octahydrate',
+  'sodium-chloride-food': 'Sodium chloride',
+  'guar-gum': 'Guar gum',
+  'carboxymethyl-cellulose': 'Sodium carboxymethyl cellulose',
 };
 
 /**

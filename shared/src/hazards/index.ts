@@ -5,3 +5,4 @@ export * from './mixture-classification';
 export * from './hazard-notes';
 export * from './evaluate-candidate-hazards';
 export { HAZARD_STANDING_CAUTION } from '../schemas/hazards';
+export * from './optimiser-hazards';

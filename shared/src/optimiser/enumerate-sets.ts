@@ -1,3 +1,4 @@
+import { hazardTags, isHazardCapToken } from '../hazards/optimiser-hazards';
 import type { Brief } from '../schemas/briefs';
 import type { IngredientSet, OptimiserIngredient } from './types';
 
@@ -49,13 +50,14 @@ export function enumerateSets(
   const byId = new Map(library.map((i) => [i.id, i]));
   const allowed = new Set(brief.allowedIngredientIds);
   const excludedIds = new Set(brief.excludedIngredientIds);
-  const hazards = new Set(brief.excludedHazardClasses);
+  // Cap tokens (`precursor-an`, `cap:eye-dam-1`, …) cap concentrations instead of excluding (hazards/optimiser-hazards.ts).
+  const hazards = new Set(brief.excludedHazardClasses.filter((h) => !isHazardCapToken(h)));
   const excluded: ExcludedIngredient[] = [];
   const waterCandidates = library.filter(isWaterIngredient).filter((w) => !excludedIds.has(w.id));
   const water = waterCandidates[0] ?? null;
   const blockedReason = (i: OptimiserIngredient): string | null => {
     if (excludedIds.has(i.id)) return 'excluded by the brief';
-    const hit = (i.hazardClasses ?? []).filter((h) => hazards.has(h));
+    const hit = hazardTags(i).filter((h) => hazards.has(h));
     if (hit.length) return `carries excluded hazard class ${hit.join(', ')}`;
     return null;
   };

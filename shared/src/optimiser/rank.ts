@@ -32,7 +32,7 @@ function nearlyEqual(a: number, b: number, tol = TIE_TOLERANCE): boolean {
  * Order candidates: first by verification (passed, then not yet verified, then missed — a
  * candidate that meets the linear model but misses in simulation ranks below every one that
  * passes —, then failed), then by the objective (least cost / least mass ascending, most hold
- * margin descending), ties (within {@link TIE_TOLERANCE}) to the simpler mixture: fewer
+ * margin descending), ties (within {@link TIE_TOLERANCE}) to the lower hazard score, then the simpler mixture: fewer
  * actives in use, fewer actives in the set, fewer ingredients, then key. Returns a new array.
  *
  * @example rankCandidates(items, 'least-cost').map((c) => c.key) // cheapest passing first
@@ -54,6 +54,8 @@ function compareByObjective(a: RankItem, b: RankItem, dir: number, byVerificatio
     if (g !== 0) return g;
   }
   if (!nearlyEqual(a.objectiveValue, b.objectiveValue)) return dir * (a.objectiveValue - b.objectiveValue);
+  // Ties go to the less hazardous mixture, then to the simpler one.
+  if (!nearlyEqual(a.hazardScore, b.hazardScore)) return a.hazardScore - b.hazardScore;
   return a.activeCount - b.activeCount || a.setSize - b.setSize || a.ingredientCount - b.ingredientCount || (a.key < b.key ? -1 : a.key > b.key ? 1 : 0);
 }
 

@@ -14,7 +14,6 @@ import type { ChemistryPort } from '../thermal/chemistry-port';
 import { REFERENCE_TEMP_C } from '../thermal/constants';
 import { diagnoseInfeasible } from './diagnose-infeasible';
 import { enumerateSets } from './enumerate-sets';
-import { fastPort } from './fast-port';
 import { solveSetIterated, saturationEstimate, type EnthalpyIterationOptions, type IteratedSet } from './iterate-enthalpy';
 import {
   ingredientCoefficients,
@@ -32,6 +31,8 @@ import { sensitivityOf } from './sensitivity';
 import type { LpCounter } from './solve-set';
 import type { OptimiserIngredient, OptimiserWarning } from './types';
 import { verifyComposition } from './verify';
+import { hazardCapsFor } from '../hazards/optimiser-hazards';
+import { hazardsOfCandidate } from './candidate-hazards';
 import { applyIngredientCalibrations, enthalpyFactorsBySolute, scaledEnthalpyPort, type ModelCalibrations } from '../lab-logs/calibrations';
 
 export interface RunOptimisationInput {
@@ -110,7 +111,9 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
   if (calibrations) input = { ...input, ingredients: applyIngredientCalibrations(input.ingredients, calibrations) };
   const port = scaledEnthalpyPort(options.port ?? portFor(input.chemistry), enthalpyFactorsBySolute(input.ingredients, calibrations));
   const uaMultiplier = brief.uaWPerK === null || brief.uaWPerK === undefined ? (calibrations?.contacts?.[brief.contact]?.uaMultiplier ?? 1) : 1;
-  const ctx = thermalContext(brief, options.extraCaps ?? [], uaMultiplier);
+  // Cap tokens among the excluded hazard classes (`precursor-an`, `cap:eye-dam-1`, …) become caps (hazards/optimiser-hazards.ts).
+  const hazardCaps = hazardCapsFor(brief.excludedHazardClasses, input.ingredients);
+  const ctx = thermalContext(brief, [...(options.extraCaps ?? []), ...hazardCaps], uaMultiplier);
   const verifyTop = Math.max(0, options.verifyTop ?? 20);
   const counter: LpCounter = { count: 0 };
   const warnings = new Map<string, OptimiserWarning>();
@@ -207,6 +210,22 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
     options.onProgress?.(done, total);
   }
 
+  // Hazard notes and score of every distinct candidate (verified temperatures where known); the score feeds ranking ties and the Pareto front.
+  const byId = new Map(input.ingredients.map((i) => [i.id, i]));
+  for (const w of distinct) {
+    try {
+      const { hazards, warnings: hw } = hazardsOfCandidate(w.candidate, brief, byId);
+      if (hazards) {
+        w.candidate.hazards = hazards;
+        w.candidate.hazardScore = hazards.score;
+        w.hazardScore = hazards.score;
+      }
+      if (hw.length) w.candidate.warnings = dedupeWarnings([...w.candidate.warnings, ...hw]);
+    } catch (e) {
+      w.candidate.warnings.push({ code: 'hazards.failed', message: `hazard notes could not be computed: ${(e as Error).message}` });
+    }
+  }
+
   const ranked = rankCandidates(distinct, brief.objective);
   const pareto = paretoFlags(ranked);
   const candidates = ranked.map((w, i) => ({ ...w.candidate, rank: i + 1, pareto: pareto[i]! }));
@@ -248,7 +267,7 @@ const ports = new WeakMap<ChemistryLibrary, ChemistryPort>();
 function portFor(lib: ChemistryLibrary): ChemistryPort {
   let p = ports.get(lib);
   if (!p) {
-    p = fastPort(chemistryPort(lib), lib);
+    p = chemistryPort(lib);
     ports.set(lib, p);
   }
   return p;

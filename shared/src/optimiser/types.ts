@@ -1,3 +1,4 @@
+import type { IngredientHazardData } from '../schemas/hazards';
 import type { IngredientProcessInput } from '../thermal/process';
 
 /**
@@ -17,8 +18,15 @@ export interface OptimiserIngredient {
   /** Specific heat capacity of an inert ingredient, J/(g·K), when the process does not give one. */
   cpJPerGK?: number | null;
   densityGPerMl?: number | null;
-  /** GHS hazard class codes; a brief's `excludedHazardClasses` leaves such ingredients out. */
+  /** GHS hazard class codes given by hand; a brief's `excludedHazardClasses` leaves such ingredients out (with the tags of `hazardData`). */
   hazardClasses?: string[];
+  /**
+   * The ingredient's hazard data (GHS classes, ATEs, incompatibility groups, regulatory flags):
+   * its tags join `hazardClasses` for the brief's filter (hazards/optimiser-hazards.ts), cap
+   * tokens in `excludedHazardClasses` become concentration caps, and each candidate's hazard
+   * notes and score are computed from it.
+   */
+  hazardData?: IngredientHazardData | null;
   /**
    * Other ingredients this one needs in the mixture, in grams per gram of this one: iron
    * powder needs salt, carbon, a water-holding filler and water. The optimiser adds them to

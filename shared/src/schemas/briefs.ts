@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { candidateHazardsSchema } from './hazards';
 
 /**
  * A brief: what a pack must do (DESIGN.md §1, §4.4) and the optimiser's answer to it.
@@ -348,8 +349,10 @@ export const candidateSchema = z.object({
   verification: verificationSchema,
   pareto: z.boolean(),
   rank: z.number().int(),
-  /** 0 until the hazards module scores mixtures. */
+  /** The hazards module's score (hazards/hazard-notes.ts hazardScore); 0 when no ingredient carries hazard data. */
   hazardScore: z.number(),
+  /** Hazard notes, mixture classification and label of the candidate; absent when no ingredient carries hazard data. */
+  hazards: candidateHazardsSchema.optional(),
   sensitivity: z.array(sensitivitySchema),
   enthalpyIteration: z.object({ iterations: z.number().int(), settled: z.boolean(), lastRelativeChange: z.number() }),
   warnings: z.array(z.object({ code: z.string(), message: z.string() })),
