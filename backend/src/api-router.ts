@@ -14,6 +14,7 @@ import { mixturesRouter } from './mixtures/mixtures.router';
 import { briefsRouter } from './briefs/briefs.router';
 import { runsRouter } from './runs/runs.router';
 import { candidatesRouter } from './candidates/candidates.router';
+import { calibrationsRouter, candidateConfidenceRouter, labLogsRouter } from './lab-logs/lab-logs.router';
 import { candidateReviewsRouter, reviewsRouter } from './reviews/reviews.router';
 import { hazardsRouter, ingredientHazardsRouter } from './hazards/hazards.router';
 
@@ -33,6 +34,9 @@ apiRouter.use('/mixtures', mixturesRouter);
 apiRouter.use('/briefs', briefsRouter);
 apiRouter.use('/runs', runsRouter);
 apiRouter.use('/candidates', candidatesRouter);
+apiRouter.use('/candidates', candidateConfidenceRouter);
+apiRouter.use('/lab-logs', labLogsRouter);
+apiRouter.use('/calibrations', calibrationsRouter);
 apiRouter.use('/candidates', candidateReviewsRouter);
 apiRouter.use('/reviews', reviewsRouter);
 apiRouter.use('/ingredients', ingredientHazardsRouter);

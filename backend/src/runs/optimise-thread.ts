@@ -14,6 +14,7 @@ try {
     brief: input.brief,
     ingredients: input.ingredients,
     chemistry: input.chemistry,
+    calibrations: input.calibrations ?? null,
     onProgress: (done: number, total: number) => {
       const now = performance.now();
       if (done === total || now - lastProgressAt > 100) {

@@ -1,3 +1,4 @@
+import type { ModelCalibrations } from '@shared/lab-logs/calibrations';
 import type { Brief, OptimisationResult } from '@shared/schemas/briefs';
 import type { ChemistryLibrary } from '@shared/chemistry/types';
 import type { OptimiserIngredient } from '@shared/optimiser/types';
@@ -6,6 +7,8 @@ export interface OptimiseThreadInput {
   brief: Brief;
   ingredients: OptimiserIngredient[];
   chemistry: ChemistryLibrary;
+  /** Applied lab calibrations from the run's data snapshot. */
+  calibrations?: ModelCalibrations | null;
 }
 
 export type OptimiseThreadMessage =

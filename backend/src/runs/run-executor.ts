@@ -17,7 +17,7 @@ export async function executeRun(runId: number): Promise<void> {
   if (!run || run.status === 'succeeded' || run.status === 'cancelled' || run.status === 'failed') return;
   await run.update({ status: 'running', attempts: run.attempts + 1, startedAt: run.startedAt ?? new Date(), error: null });
 
-  const input: OptimiseThreadInput = { brief: run.briefSnapshot, ingredients: run.dataSnapshot.ingredients, chemistry: run.dataSnapshot.chemistry };
+  const input: OptimiseThreadInput = { brief: run.briefSnapshot, ingredients: run.dataSnapshot.ingredients, chemistry: run.dataSnapshot.chemistry, calibrations: run.dataSnapshot.calibrations ?? null };
   const worker = new Worker(new URL('./optimise-thread-boot.mjs', import.meta.url), { workerData: input });
   let lastProgressWrite = 0;
   let cancelled = false;

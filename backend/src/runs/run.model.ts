@@ -1,3 +1,4 @@
+import type { ModelCalibrations } from '@shared/lab-logs/calibrations';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute } from 'sequelize';
 import type { Brief, OptimisationResult } from '@shared/schemas/briefs';
 import type { RunStatus } from '@shared/schemas/runs';
@@ -10,6 +11,8 @@ import { UserRecord } from '../users/user.model';
 export interface RunDataSnapshot {
   ingredients: (OptimiserIngredient & { version: number })[];
   chemistry: ChemistryLibrary;
+  /** Lab calibrations active when the run was created (lab-logs); absent on older runs. */
+  calibrations?: ModelCalibrations;
 }
 
 /** The stored result minus the candidates, which are rows of their own. */

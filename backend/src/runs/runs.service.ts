@@ -11,6 +11,7 @@ import { IngredientRecord } from '../ingredients/ingredient.model';
 import { workspaceChemistryLibrary } from '../species/species.service';
 import { Workspace } from '../workspaces/workspace.model';
 import { RunRecord, type RunDataSnapshot } from './run.model';
+import { activeCalibrations } from '../lab-logs/lab-logs.service';
 import { cancelRunJob, enqueueRun } from './run-queue';
 
 export function toRunSummary(run: RunRecord): RunSummary {
@@ -65,7 +66,8 @@ export async function createRun(actor: AuthUser, briefId: number): Promise<numbe
     IngredientRecord.findAll({ where: { workspaceId: actor.workspaceId }, order: [['id', 'ASC']] }),
     workspaceChemistryLibrary(actor.workspaceId),
   ]);
-  const dataSnapshot: RunDataSnapshot = { ingredients: ingredients.map(toOptimiserIngredient), chemistry };
+  const calibrations = await activeCalibrations(actor.workspaceId);
+  const dataSnapshot: RunDataSnapshot = { ingredients: ingredients.map(toOptimiserIngredient), chemistry, calibrations };
   const run = await sequelize.transaction(async (transaction) => {
     const created = await RunRecord.create(
       { workspaceId: actor.workspaceId, briefId: brief.id, briefVersion: brief.version, briefSnapshot: brief.spec, dataSnapshot, createdById: actor.id },
@@ -126,6 +128,7 @@ export async function getRun(workspaceId: number, id: number): Promise<RunDetail
     dataSnapshot: {
       ingredients: run.dataSnapshot.ingredients.map((i) => ({ id: i.id, name: i.name, version: i.version })),
       speciesCount: run.dataSnapshot.chemistry.species.length,
+      calibrations: { ...(run.dataSnapshot.calibrations ?? {}) },
     },
   };
 }

@@ -6,3 +6,4 @@ export * from './health';
 export * from './library';
 export * from './thermo';
 export * from './reviews';
+export * from './lab-logs';

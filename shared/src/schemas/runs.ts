@@ -65,7 +65,7 @@ export const runDetailSchema = runSummarySchema.extend({
   stats: z.record(z.string(), z.number()).nullable(),
   warnings: z.array(z.object({ code: z.string(), message: z.string() })),
   /** What the run used: ingredient versions, species count, so results stay reproducible. */
-  dataSnapshot: z.object({ ingredients: z.array(z.object({ id: z.string(), name: z.string(), version: z.number() })), speciesCount: z.number() }),
+  dataSnapshot: z.object({ ingredients: z.array(z.object({ id: z.string(), name: z.string(), version: z.number() })), speciesCount: z.number(), calibrations: z.record(z.string(), z.unknown()).optional() }),
 });
 export type RunDetail = z.infer<typeof runDetailSchema>;
 export const runListResponseSchema = z.object({ runs: z.array(runSummarySchema) });

@@ -1,0 +1,70 @@
+import { z } from 'zod';
+import { contactCaseSchema } from './briefs';
+
+/** Payloads of /api/lab-logs and /api/calibrations. */
+
+export const columnMappingSchema = z.object({
+  timeColumn: z.number({ error: 'must be a column number' }).int().min(0),
+  timeUnit: z.enum(['s', 'min', 'clock'], { error: 'must be s, min or clock' }),
+  tempColumns: z.array(z.number().int().min(0)).min(1, 'choose at least one temperature column').max(8, 'choose at most 8 temperature columns'),
+  tempUnit: z.enum(['C', 'F'], { error: 'must be C or F' }),
+});
+export type ColumnMappingInput = z.infer<typeof columnMappingSchema>;
+
+export const labConditionsSchema = z.object({
+  ambientC: z.number({ error: 'must be a temperature in °C' }).min(-60).max(80),
+  contact: contactCaseSchema,
+  /** Mass of the whole pack tested, g (for the pouch area when no area is given). */
+  packMassG: z.number().positive('must be greater than 0').max(100_000).optional(),
+  packAreaM2: z.number().positive().max(10).optional(),
+  /** Temperature at the start; default the first reading of the compared channel. */
+  initialTempC: z.number().min(-60).max(150).optional(),
+  /** Which mapped temperature channel is the pack (index into the mapping's tempColumns). */
+  channel: z.number().int().min(0).max(7).default(0),
+});
+export type LabConditions = z.infer<typeof labConditionsSchema>;
+
+export const labComponentSchema = z
+  .object({
+    ingredientId: z.number().int().positive().optional(),
+    formula: z.string().trim().min(1).max(60).optional(),
+    massG: z.number().positive('must be greater than 0').max(100_000),
+  })
+  .refine((c) => (c.ingredientId === undefined) !== (c.formula === undefined), { message: 'give an ingredientId or a formula, not both' });
+
+/** The JSON in the `meta` field of the multipart upload. */
+export const createLabLogSchema = z
+  .object({
+    name: z.string().trim().min(1, 'is required').max(120),
+    candidateId: z.number().int().positive().optional(),
+    components: z.array(labComponentSchema).min(1).max(12).optional(),
+    mapping: columnMappingSchema,
+    conditions: labConditionsSchema,
+    notes: z.string().max(2000).optional(),
+  })
+  .refine((m) => (m.candidateId === undefined) !== (m.components === undefined), {
+    message: 'give a candidateId or the mixture components, one of the two',
+    path: ['candidateId'],
+  });
+export type CreateLabLogRequest = z.infer<typeof createLabLogSchema>;
+
+export const labLogListQuerySchema = z.object({
+  candidateId: z.coerce.number().int().positive().optional(),
+});
+
+export const fitRequestSchema = z.object({
+  fit: z.array(z.enum(['ua', 'enthalpy', 'rate'])).min(1).max(3).default(['ua', 'enthalpy', 'rate']),
+});
+
+export const applyCalibrationSchema = z
+  .object({
+    labLogId: z.number({ error: 'is required' }).int().positive(),
+    scope: z.enum(['contact', 'ingredient']),
+    /** For scope contact: the case whose UA the fitted multiplier scales (default the log's). */
+    contact: contactCaseSchema.optional(),
+    /** For scope ingredient: the ingredient whose rate constant and enthalpy factor are set. */
+    ingredientId: z.number().int().positive().optional(),
+    note: z.string().max(500).optional(),
+  })
+  .refine((b) => b.scope !== 'ingredient' || b.ingredientId !== undefined, { message: 'is required for an ingredient calibration', path: ['ingredientId'] });
+export type ApplyCalibrationRequest = z.infer<typeof applyCalibrationSchema>;
