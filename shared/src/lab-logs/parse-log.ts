@@ -165,8 +165,8 @@ function isDataRow(cells: string[]): boolean {
 
 /**
  * Reads a logger's CSV: papaparse detects the delimiter (comma, semicolon, tab, pipe); the
- * header is the row just above the first two consecutive data rows (every cell a number or a
- * clock time) when it has text in it, and lines above it are kept as the preamble. Each column
+ * header is the row just above the first data row (every cell a number or a clock time, with
+ * another data row within the next two) when it has text in it, and lines above it are kept as the preamble. Each column
  * is classed as number, clock or text from its cells, and a mapping is suggested: the first
  * clock column (else a column named like a time) for time, the remaining numeric columns for
  * temperature, units from the header text (°F, (min), …).
@@ -182,8 +182,9 @@ export function previewLog(text: string): LogPreview {
   // papaparse counts lines; with greedy skipping we recover line numbers from the cursor.
   const lines = lineNumbers(body, all.length, parsed);
   let first = -1;
+  // The first data row: one followed by another within two rows (so one bad row early on is a row error, not the header).
   for (let i = 0; i + 1 < all.length; i++) {
-    if (isDataRow(all[i]!) && isDataRow(all[i + 1]!)) {
+    if (isDataRow(all[i]!) && (isDataRow(all[i + 1]!) || (i + 2 < all.length && isDataRow(all[i + 2]!)))) {
       first = i;
       break;
     }
