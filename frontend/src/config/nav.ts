@@ -30,6 +30,13 @@ export const NAV_ITEMS: readonly NavItem[] = [
     quickLink: true,
   },
   {
+    to: '/reviews',
+    label: 'Reviews',
+    description: 'Candidates waiting for your review or revision, and their dossiers.',
+    roles: EVERYONE,
+    quickLink: true,
+  },
+  {
     to: '/library',
     label: 'Ingredient library',
     description: 'Ingredients with their grades, costs, processes, sources and safety data sheets.',
