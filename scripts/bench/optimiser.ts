@@ -15,7 +15,6 @@
  */
 import { defaultChemistryLibrary } from '../../shared/src/chemistry';
 import { DEMO_BRIEFS, DEMO_LIBRARY } from '../../shared/src/optimiser/demo-library';
-import { fastPort } from '../../shared/src/optimiser/fast-port';
 import { objectiveValue, rowValue, type LinearModel } from '../../shared/src/optimiser/linear-model';
 import { runOptimisation, type RunOptimisationOutput } from '../../shared/src/optimiser/run-optimisation';
 import { solveLp, toLpProblem, type LpProblem } from '../../shared/src/optimiser/solve-set';
@@ -50,7 +49,7 @@ export async function runOptimiserBench(log: (line: string) => void = console.lo
   let t = performance.now();
   const first = runOptimisation(input, { verifyTop: 20 });
   const coldMs = performance.now() - t;
-  const port = fastPort(chemistryPort(lib), lib);
+  const port = chemistryPort(lib);
   runOptimisation(input, { port, verifyTop: 20 });
   const warm: number[] = [];
   let run: RunOptimisationOutput = first;

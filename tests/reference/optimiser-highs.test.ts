@@ -3,7 +3,6 @@ import type { Highs } from 'highs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
 import { DEMO_BRIEFS, DEMO_LIBRARY } from '@shared/optimiser/demo-library';
-import { fastPort } from '@shared/optimiser/fast-port';
 import { rowViolation, type LinearModel } from '@shared/optimiser/linear-model';
 import { runOptimisation, type RunOptimisationOutput } from '@shared/optimiser/run-optimisation';
 import { toLpProblem } from '@shared/optimiser/solve-set';
@@ -15,7 +14,7 @@ import { disposeHighsModel, highsModule, solveWithHighs } from './optimiser-high
 // LP that javascript-lp-solver solved for every set; optima must agree within 1e-6 relative.
 
 const lib = defaultChemistryLibrary();
-const port = fastPort(chemistryPort(lib), lib);
+const port = chemistryPort(lib);
 let highs: Highs;
 beforeAll(async () => {
   highs = await highsModule();

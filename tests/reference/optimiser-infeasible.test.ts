@@ -3,7 +3,6 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
 import { DEMO_LIBRARY } from '@shared/optimiser/demo-library';
 import { diagnoseInfeasible } from '@shared/optimiser/diagnose-infeasible';
-import { fastPort } from '@shared/optimiser/fast-port';
 import { rowValue } from '@shared/optimiser/linear-model';
 import { runOptimisation } from '@shared/optimiser/run-optimisation';
 import { toLpProblem } from '@shared/optimiser/solve-set';
@@ -11,7 +10,7 @@ import { chemistryPort } from '@shared/thermal/chemistry-adapter';
 import { disposeHighsModel, highsModule, solveWithHighs } from './optimiser-highs';
 
 const lib = defaultChemistryLibrary();
-const port = fastPort(chemistryPort(lib), lib);
+const port = chemistryPort(lib);
 let highs: Highs;
 beforeAll(async () => {
   highs = await highsModule();

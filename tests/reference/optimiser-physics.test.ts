@@ -1,14 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
 import { DEMO_LIBRARY } from '@shared/optimiser/demo-library';
-import { fastPort } from '@shared/optimiser/fast-port';
 import { GAS_MOLAR_VOLUME_L_PER_MOL, ingredientCoefficients, parseIngredient } from '@shared/optimiser/linear-model';
 import { runOptimisation } from '@shared/optimiser/run-optimisation';
 import { chemistryPort } from '@shared/thermal/chemistry-adapter';
 import { solveEndState } from '@shared/thermal/end-state';
 
 const lib = defaultChemistryLibrary();
-const port = fastPort(chemistryPort(lib), lib);
+const port = chemistryPort(lib);
 const byId = new Map(DEMO_LIBRARY.map((i) => [i.id, i]));
 const coeff = (id: string, n = Infinity, w = 0.01) => ingredientCoefficients(parseIngredient(port, byId.get(id)!, 0.03), 20, { nH2O_per_mol: n, soluteMassFraction: w }, port);
 

@@ -2,7 +2,6 @@ import type { Highs } from 'highs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
 import { DEMO_BRIEFS, DEMO_LIBRARY } from '@shared/optimiser/demo-library';
-import { fastPort } from '@shared/optimiser/fast-port';
 import { runOptimisation } from '@shared/optimiser/run-optimisation';
 import { toLpProblem } from '@shared/optimiser/solve-set';
 import { sweepTarget } from '@shared/optimiser/sweep';
@@ -10,7 +9,7 @@ import { chemistryPort } from '@shared/thermal/chemistry-adapter';
 import { disposeHighsModel, highsModule, solveWithHighs } from './optimiser-highs';
 
 const lib = defaultChemistryLibrary();
-const port = fastPort(chemistryPort(lib), lib);
+const port = chemistryPort(lib);
 let highs: Highs;
 beforeAll(async () => {
   highs = await highsModule();

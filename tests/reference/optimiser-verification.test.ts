@@ -1,13 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
 import { DEMO_LIBRARY } from '@shared/optimiser/demo-library';
-import { fastPort } from '@shared/optimiser/fast-port';
 import { runOptimisation } from '@shared/optimiser/run-optimisation';
 import type { OptimiserIngredient } from '@shared/optimiser/types';
 import { chemistryPort } from '@shared/thermal/chemistry-adapter';
 
 const lib = defaultChemistryLibrary();
-const port = fastPort(chemistryPort(lib), lib);
+const port = chemistryPort(lib);
 const byId = new Map(DEMO_LIBRARY.map((i) => [i.id, i]));
 
 /**

@@ -9,6 +9,7 @@ import {
   findSpeciesByKey,
   UnknownSpeciesError,
 } from './library';
+import { memo } from './memo';
 import type { ChemistryLibrary, ComputationWarning, EutecticPoint, SpeciesRecord } from './types';
 
 /** Enthalpy of fusion of ice at 0 °C, kJ/mol (from memory; CRC Handbook, IAPWS 6.007 kJ/mol). */
@@ -17,11 +18,15 @@ export const WATER_FUSION_ENTHALPY_KJ_PER_MOL = 6.01;
 export const WATER_MOLAR_MASS_G_PER_MOL = 2 * 1.008 + 15.999;
 const R = 8.314462618;
 
-/** The solid (or gas, liquid) that dissolves, resolved from a key like `NH4NO3(cr)` or a formula. */
+/** The solid (or gas, liquid) that dissolves, resolved from a key like `NH4NO3(cr)` or a formula (remembered per library). */
 function resolveSolute(lib: ChemistryLibrary, solute: string | SpeciesRecord): SpeciesRecord {
   if (typeof solute !== 'string') return solute;
-  const parsed = parseFormula(solute);
-  return parsed.phase ? findSpeciesByKey(lib, solute) : findSpecies(lib, solute, 'cr');
+  return memo(lib.species, 'solute', solute, () => (parseFormula(solute).phase ? findSpeciesByKey(lib, solute) : findSpecies(lib, solute, 'cr')));
+}
+
+/** Anhydrous formula and crystal water of a formula (remembered per library). */
+function hydrateOf(lib: ChemistryLibrary, formula: string): { anhydrous: string; waterCount: number } {
+  return memo(lib.species, 'hydrate', formula, () => splitHydrate(formula));
 }
 
 export interface IonTerm {
@@ -44,7 +49,13 @@ export function dissolutionProducts(
   solute: string | SpeciesRecord,
 ): { solute: SpeciesRecord; products: IonTerm[]; waterReleased: number } {
   const s = resolveSolute(lib, solute);
-  const { anhydrous, waterCount } = splitHydrate(s.formula);
+  // The split depends only on the formula and the library's aqueous species: found once per library.
+  const found = memo(lib.species, 'products', s.formula, () => splitIntoAqueous(lib, s));
+  return { solute: s, products: found.products.map((p) => ({ ...p })), waterReleased: found.waterReleased };
+}
+
+function splitIntoAqueous(lib: ChemistryLibrary, s: SpeciesRecord): { products: IonTerm[]; waterReleased: number } {
+  const { anhydrous, waterCount } = hydrateOf(lib, s.formula);
   const target = parseFormula(anhydrous);
   const targetKey = hillFormula(target);
   const ions = lib.species.filter((x) => (x.phase === 'ai' || x.phase === 'ao' || x.phase === 'aq') && parseFormula(x.formula).charge !== 0);
@@ -70,7 +81,6 @@ export function dissolutionProducts(
       for (const [e, n] of Object.entries(pa.elements)) el[e] = (el[e] ?? 0) + q * n;
       if (hillFormula({ elements: el, charge: 0 }) === targetKey) {
         return {
-          solute: s,
           products: [
             { species: c, nu: p },
             { species: a, nu: q },
@@ -82,7 +92,7 @@ export function dissolutionProducts(
   }
   // Non-electrolyte: the undissociated aqueous species of the same composition.
   const neutral = lib.species.find((x) => (x.phase === 'ao' || x.phase === 'aq') && hillFormula(parseFormula(x.formula)) === targetKey);
-  if (neutral) return { solute: s, products: [{ species: neutral, nu: 1 }], waterReleased: waterCount };
+  if (neutral) return { products: [{ species: neutral, nu: 1 }], waterReleased: waterCount };
   throw new UnknownSpeciesError(
     `Cannot split "${s.key}" into aqueous species: no cation–anion pair or aqueous species in the library has composition ${targetKey}.`,
     { formula: s.formula, phase: s.phase },
@@ -161,7 +171,7 @@ export function integralEnthalpyOfSolution(
   nH2O_per_mol: number,
 ): IntegralEnthalpyResult {
   const s = resolveSolute(lib, solute);
-  const { anhydrous, waterCount } = splitHydrate(s.formula);
+  const { anhydrous, waterCount } = hydrateOf(lib, s.formula);
   const anhydrousKey = `${anhydrous}(${s.phase})`;
   const series = findDilutionSeries(lib, anhydrousKey);
   const warnings: ComputationWarning[] = [];
@@ -175,9 +185,12 @@ export function integralEnthalpyOfSolution(
 
   let dfHInf = series.dfH_infinite_kJ_per_mol ?? null;
   if (dfHInf === null) {
-    const inf = enthalpyOfSolutionInfinite(lib, anhydrousKey);
-    const solid = findSpeciesByKey(lib, anhydrousKey);
-    dfHInf = inf.dH_kJ_per_mol + (solid.dfH_kJ_per_mol as number);
+    // Without the series' ∞ row, the anchor comes from the ions (Hess's law): once per library and solute.
+    dfHInf = memo(lib.species, 'dfH-infinite', anhydrousKey, () => {
+      const inf = enthalpyOfSolutionInfinite(lib, anhydrousKey);
+      const solid = findSpeciesByKey(lib, anhydrousKey);
+      return inf.dH_kJ_per_mol + (solid.dfH_kJ_per_mol as number);
+    });
   }
   const ns = series.points.map((p) => p.nH2O_per_mol);
   const hs = series.points.map((p) => p.dfH_kJ_per_mol);
@@ -198,7 +211,7 @@ export function integralEnthalpyOfSolution(
       message: `n = ${round(nH2O_per_mol, 3)} mol H2O per mol is more concentrated than the dilution data for ${series.solute} (n ≥ ${nMin}); extrapolated from the first two points.`,
     });
   } else {
-    dfH = pchip(ns.map(Math.log), hs)(Math.log(nH2O_per_mol));
+    dfH = memo(series, 'pchip', '', () => pchip(ns.map(Math.log), hs))(Math.log(nH2O_per_mol));
   }
   return {
     dH_kJ_per_mol: dfH + offset,
@@ -219,7 +232,7 @@ export function nH2OPerMol(lib: ChemistryLibrary, solute: string | SpeciesRecord
   const s = resolveSolute(lib, solute);
   if (!(soluteMassG > 0)) throw new RangeError(`Solute mass must be > 0 g, found ${soluteMassG}.`);
   if (!(waterMassG >= 0)) throw new RangeError(`Water mass must be ≥ 0 g, found ${waterMassG}.`);
-  const { waterCount } = splitHydrate(s.formula);
+  const { waterCount } = hydrateOf(lib, s.formula);
   const molSolute = soluteMassG / s.molarMass_g_per_mol;
   return (waterMassG / WATER_MOLAR_MASS_G_PER_MOL + waterCount * molSolute) / molSolute;
 }
@@ -280,7 +293,7 @@ export function solubility(lib: ChemistryLibrary, solute: string, tempC: number)
       message: `${tempC} °C is outside the solubility data for ${series.solute} (${tMin}–${tMax} °C); extrapolated linearly from the end segment.`,
     });
   } else {
-    g = pchip(ts, gs)(tempC);
+    g = memo(series, 'pchip', '', () => pchip(ts, gs))(tempC);
   }
   return { gPer100gWater: g, massFraction: g / (100 + g), tempC, warnings, source: series.source };
 }
@@ -326,11 +339,11 @@ export function freezingPoint(lib: ChemistryLibrary, solute: string, massFractio
         code: 'outside-freezing-data',
         message: `w = ${round(massFraction, 4)} is above the freezing-point data for ${series.solute} (w ≤ ${wMax}); extrapolated linearly.`,
       });
-    } else dT = pchip(ws, ds)(massFraction);
+    } else dT = memo(series, 'pchip', '', () => pchip(ws, ds))(massFraction);
     return { tempC: -dT, depressionK: dT, basis: 'tabulated', warnings, source: series.source };
   }
   const { solute: s, products } = dissolutionProducts(lib, solute);
-  const { anhydrous } = splitHydrate(s.formula);
+  const { anhydrous } = hydrateOf(lib, s.formula);
   const M = molarMassOfAnhydrous(lib, anhydrous, s);
   const nu = products.reduce((n, p) => n + p.nu, 0);
   const molality = massFraction / (1 - massFraction) / (M / 1000);

@@ -5,6 +5,7 @@ import solubilityData from './data/solubility.json';
 import heatCapacityData from './data/solution-heat-capacity.json';
 import speciesData from './data/species.json';
 import { hillFormula, parseFormula } from './formula';
+import { memo } from './memo';
 import type {
   ChemistryLibrary,
   DilutionSeries,
@@ -165,6 +166,10 @@ function phaseCandidates(phase: Phase, charged: boolean): Phase[] {
  * @example findSpecies(lib, 'Ca^2+', 'aq').key // → 'Ca^2+(ai)'
  */
 export function findSpecies(lib: ChemistryLibrary, formula: string, phase?: Phase | null): SpeciesRecord {
+  return memo(lib.species, 'find', `${formula}\u0000${phase ?? ''}`, () => searchSpecies(lib, formula, phase));
+}
+
+function searchSpecies(lib: ChemistryLibrary, formula: string, phase?: Phase | null): SpeciesRecord {
   const parsed = parseFormula(formula);
   const wanted = phase ?? parsed.phase;
   const idx = indexOf(lib);
@@ -231,21 +236,29 @@ export function findHeatCapacityCoefficients(lib: ChemistryLibrary, soluteKey: s
   return findSeries(lib.solutionHeatCapacity, soluteKey);
 }
 
+/** One empty list for a library without the optional tables (so its lookups are remembered too). */
+const NO_SERIES: never[] = [];
+
 /** Freezing-point series of a solute, or null. */
 export function findFreezingPointSeries(lib: ChemistryLibrary, soluteKey: string): FreezingPointSeries | null {
-  return findSeries(lib.freezingPoint ?? [], soluteKey);
+  return findSeries(lib.freezingPoint ?? NO_SERIES, soluteKey);
 }
 
 /** Eutectic of a solute with water, or null. */
 export function findEutectic(lib: ChemistryLibrary, soluteKey: string): EutecticPoint | null {
-  return findSeries(lib.eutectics ?? [], soluteKey);
+  return findSeries(lib.eutectics ?? NO_SERIES, soluteKey);
 }
 
 /**
  * Match a series by solute: the exact key, else the anhydrous composition of the solute in the
- * solid/liquid/gas phase it was given.
+ * solid/liquid/gas phase it was given. The answer (a series or none) is remembered per list and
+ * solute, so the formulas are parsed once, not on every lookup.
  */
 function findSeries<T extends { solute: string }>(list: T[], soluteKey: string): T | null {
+  return memo(list, 'series', soluteKey, () => searchSeries(list, soluteKey));
+}
+
+function searchSeries<T extends { solute: string }>(list: T[], soluteKey: string): T | null {
   const exact = list.find((x) => x.solute === soluteKey);
   if (exact) return exact;
   const parsed = parseFormula(soluteKey);

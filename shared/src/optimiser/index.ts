@@ -40,5 +40,4 @@ export { sweepTarget } from './sweep';
 export type { SweepOptions, SweepPoint, SweepResult } from './sweep';
 export { runOptimisation, uselessReason } from './run-optimisation';
 export type { RunOptimisationInput, RunOptimisationOptions, RunOptimisationOutput } from './run-optimisation';
-export { fastPort } from './fast-port';
 export { DEMO_BRIEFS, DEMO_LIBRARY, DEMO_WATER_ID } from './demo-library';

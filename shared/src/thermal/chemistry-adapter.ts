@@ -57,6 +57,8 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
     lnNMax: number;
     f: (lnN: number) => number;
     infinite: number;
+    /** Below the dilution data: the chemistry layer's line in ln n through the first two tabulated points. */
+    below: { lnN1: number; lnN2: number; h1: number; h2: number; nMin: number; solute: string } | null;
   }
   const dilutionCache = new Map<string, DilutionCurve>();
   const dilution = (key: string): DilutionCurve => {
@@ -74,7 +76,13 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
         xs.push(lnN);
         ys.push(integralEnthalpyOfSolution(lib, key, Math.exp(lnN)).dH_kJ_per_mol);
       }
-      c = { lnNMin, lnNMax, f: pchip(xs, ys), infinite: integralEnthalpyOfSolution(lib, key, Infinity).dH_kJ_per_mol };
+      const n1 = series?.points[0]?.nH2O_per_mol;
+      const n2 = series?.points[1]?.nH2O_per_mol;
+      const below =
+        series && n1 !== undefined && n2 !== undefined
+          ? { lnN1: Math.log(n1), lnN2: Math.log(n2), h1: integralEnthalpyOfSolution(lib, key, n1).dH_kJ_per_mol, h2: integralEnthalpyOfSolution(lib, key, n2).dH_kJ_per_mol, nMin: n1, solute: series.solute }
+          : null;
+      c = { lnNMin, lnNMax, f: pchip(xs, ys), infinite: integralEnthalpyOfSolution(lib, key, Infinity).dH_kJ_per_mol, below };
       dilutionCache.set(key, c);
     }
     return c;
@@ -123,9 +131,17 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
     return freezingCache.get(key) ?? null;
   };
 
+  const cpFallbackCache = new Map<string, PortValue>();
+  const molarMassCache = new Map<string, number>();
+
   const port: ChemistryPort = {
     molarMass_g_per_mol(formulaOrKey) {
-      return molarMass(formulaOrKey.replace(/\((cr|l|g|aq|ai|ao)\)$/, ''));
+      let m = molarMassCache.get(formulaOrKey);
+      if (m === undefined) {
+        m = molarMass(formulaOrKey.replace(/\((cr|l|g|aq|ai|ao)\)$/, ''));
+        molarMassCache.set(formulaOrKey, m);
+      }
+      return m;
     },
     formationEnthalpy_kJ_per_mol(key) {
       return species(key)?.dfH_kJ_per_mol ?? null;
@@ -138,6 +154,19 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
       if (n === Infinity) return { value: c.infinite, warnings: NO_WARNINGS };
       const lnN = Math.log(n);
       if (lnN >= c.lnNMin && lnN <= c.lnNMax) return { value: c.f(lnN), warnings: NO_WARNINGS };
+      const b = c.below;
+      if (b && n > 0 && lnN < b.lnN1) {
+        // The chemistry layer's own extrapolation (dissolution.ts), from the two end values it gave once.
+        return {
+          value: b.h1 + ((b.h2 - b.h1) * (lnN - b.lnN1)) / (b.lnN2 - b.lnN1),
+          warnings: [
+            {
+              code: 'below-dilution-data',
+              message: `n = ${Math.round(n * 1000) / 1000} mol H2O per mol is more concentrated than the dilution data for ${b.solute} (n ≥ ${b.nMin}); extrapolated from the first two points.`,
+            },
+          ],
+        };
+      }
       const r = integralEnthalpyOfSolution(lib, key, n);
       return { value: r.dH_kJ_per_mol, warnings: r.warnings };
     },
@@ -154,9 +183,12 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
     apparentSoluteCp_J_per_gK(key, w, tempC): PortValue {
       const c = findHeatCapacityCoefficients(lib, key);
       if (!c) {
+        // Independent of w and T: worked out once per solute.
+        const known = cpFallbackCache.get(key);
+        if (known) return known;
         const s = species(key);
         const cp = s?.Cp_J_per_mol_K != null ? s.Cp_J_per_mol_K / s.molarMass_g_per_mol : 1.2;
-        return {
+        const fallback: PortValue = {
           value: cp,
           warnings: [
             {
@@ -165,6 +197,8 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
             },
           ],
         };
+        cpFallbackCache.set(key, fallback);
+        return fallback;
       }
       const wc = Math.min(Math.max(w, 0), c.massFractionMax);
       const tc = Math.min(Math.max(tempC, c.tempMinC), c.tempMaxC);
