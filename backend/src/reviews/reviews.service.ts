@@ -150,7 +150,12 @@ export async function reviseCandidate(actor: AuthUser, id: number, body: ReviseB
     lines.map((l) => ({ ingredient: toOptimiserIngredient(l.record), massG: l.massG })),
   );
   const { profile: _profile, ...verificationOnly } = verification;
-  const actives = lines.filter((l) => l.record.role === 'active').sort((a, b) => a.record.id - b.record.id);
+  // In the order of the parent's set, so the names keep their order; new actives follow.
+  const order = (id: number) => {
+    const k = parentProbe.data.setIds.indexOf(String(id));
+    return k < 0 ? Number.MAX_SAFE_INTEGER : k;
+  };
+  const actives = lines.filter((l) => l.record.role === 'active').sort((a, b) => order(a.record.id) - order(b.record.id) || a.record.id - b.record.id);
   const fillMassG = lines.reduce((a, l) => a + l.massG, 0);
   const cost = lines.reduce((a, l) => a + (Number(l.record.costPerKg) * l.massG) / 1000, 0) + Number(brief.packaging.cost);
   const label = (r: IngredientRecord) => (r.grade ? `${r.name} (${r.grade})` : r.name);

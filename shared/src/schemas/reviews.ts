@@ -70,7 +70,7 @@ export const reviewDecisionRequestSchema = z
         if (!c.modelValidInRegime) ctx.addIssue({ code: 'custom', path: ['checklist', 'modelValidInRegime'], message: 'must be checked to approve' });
         const log = c.labLog;
         const ok = log && ('attached' in log ? log.attached : log.waivedReason.length > 0);
-        if (!ok) ctx.addIssue({ code: 'custom', path: ['checklist', 'labLog'], message: 'attach a lab log, or waive it with a reason, to approve' });
+        if (!ok) ctx.addIssue({ code: 'custom', path: ['checklist', 'labLog'], message: 'must be attached, or waived with a reason, to approve' });
       } else {
         const r = checklist as RegulatoryChecklist;
         for (const key of Object.keys(REGULATORY_CHECKLIST_LABELS) as (keyof RegulatoryChecklist)[]) {

@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import type { Dossier } from '@shared/schemas/reviews';
 import { CHEMISTRY_CHECKLIST_LABELS, REGULATORY_CHECKLIST_LABELS } from '@shared/schemas/reviews';
 import { LineChart, type ChartBand } from '@/components/charts/line-chart';
+import { chemistryName } from '@/lib/candidate-figures';
 import { formatDateTime, formatMoney, formatNumber, formatQuantity } from '@/lib/format';
 import { useHStatements } from '../api/get-h-statements';
 import { HazardNotesList, LabelElements, StandingCaution } from './hazard-notes';
@@ -40,7 +41,7 @@ export function DossierView({ dossier: d }: { dossier: Dossier }) {
     <article className="dossier flex flex-col gap-6 rounded-card border border-ink-100 bg-surface p-6 print:border-0 print:p-0" aria-label="Dossier">
       <header className="flex flex-col gap-1">
         <p className="text-caption font-semibold tracking-wide text-ink-500 uppercase">{d.workspace.name} · candidate dossier</p>
-        <h1 className="text-title font-bold text-ink-900">{c.setNames.join(' + ')}</h1>
+        <h1 className="text-title font-bold text-ink-900">{chemistryName(c)}</h1>
         <p className="flex flex-wrap items-center gap-2 text-small text-ink-700">
           Candidate {c.id}, revision {d.status.revision} · <ReviewStateBadge state={d.status.state} />
         </p>

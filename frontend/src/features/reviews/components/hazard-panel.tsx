@@ -2,11 +2,13 @@ import { Card, CardBody, CardHeader } from '@/components/ui/card';
 import { QueryError } from '@/components/ui/query-error';
 import { Loading } from '@/components/ui/spinner';
 import { useCandidateHazards } from '../api/get-candidate-hazards';
+import { useHStatements } from '../api/get-h-statements';
 import { HazardNotesList, LabelElements, StandingCaution } from './hazard-notes';
 
 /** A candidate's computed hazard notes, its GHS label elements and the standing caution. */
 export function HazardPanel({ candidateId }: { candidateId: number }) {
   const q = useCandidateHazards(candidateId);
+  const h = useHStatements();
   return (
     <Card>
       <CardHeader id="hazards-heading" title="Hazard notes" description="Computed from the composition, the ingredients’ hazard data and the predicted temperatures." />
@@ -26,7 +28,7 @@ export function HazardPanel({ candidateId }: { candidateId: number }) {
               <h3 id="label-heading" className="mb-2 text-body font-bold text-ink-900">
                 Label elements (GHS)
               </h3>
-              <LabelElements label={q.data.hazards.label} />
+              <LabelElements label={q.data.hazards.label} hTexts={h.data?.texts} />
             </section>
           </>
         )}

@@ -39,6 +39,8 @@ function printCss(paper: Paper): string {
   html, body { background: #fff !important; }
   header:not(.dossier *), nav:not(.dossier *), footer:not(.dossier *), .dossier-toolbar, a[href="#main"] { display: none !important; }
   main { max-width: none !important; padding: 0 !important; margin: 0 !important; }
+  .dossier { width: auto !important; }
+  .dossier button { display: none !important; }
   .dossier { font-size: 10.5pt; }
   .dossier h2 { break-after: avoid; }
   .dossier-section, .dossier li, .dossier tr { break-inside: avoid; }
