@@ -72,6 +72,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                 { path: 'candidates/:id', lazy: () => import('./routes/app/candidates/candidate').then(load) },
                 { path: 'candidates/:id/dossier', lazy: () => import('./routes/app/candidates/dossier').then(load) },
                 { path: 'reviews', lazy: () => import('./routes/app/reviews').then(load) },
+                { path: 'lab-logs', lazy: () => import('./routes/app/lab-logs/list').then(load) },
+                { path: 'lab-logs/:id', lazy: () => import('./routes/app/lab-logs/log').then(load) },
                 { path: '*', lazy: () => import('./routes/not-found').then(load) },
               ],
             },

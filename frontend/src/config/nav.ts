@@ -44,6 +44,13 @@ export const NAV_ITEMS: readonly NavItem[] = [
     quickLink: true,
   },
   {
+    to: '/lab-logs',
+    label: 'Lab logs',
+    description: 'Recorded temperature curves against the prediction; calibrate the model.',
+    roles: ['chemist', 'admin'],
+    quickLink: true,
+  },
+  {
     to: '/species',
     label: 'Species data',
     description: 'Enthalpies of formation, entropies and heat capacities behind every calculation.',

@@ -1,5 +1,5 @@
 import { useEffect, useId, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
-import { bisector, line } from 'd3';
+import { area, bisector, line } from 'd3';
 import { Button } from '@/components/ui/button';
 import { cn } from '@/components/ui/cn';
 import {
@@ -15,6 +15,9 @@ import {
 } from './use-chart-scales';
 
 export type { ChartAxis, ChartBand, ChartPoint, ChartRule, ChartSeries, ChartTone } from './use-chart-scales';
+
+/** A shaded range between two curves (e.g. a 5–95 % confidence band); pair it with series that set the domain. */
+export type ChartArea = { id: string; label: string; points: readonly { x: number; lo: number; hi: number }[]; tone?: ChartTone; opacity?: number };
 
 const TONE_COLOURS: Record<ChartTone, string> = {
   frost: 'var(--color-frost-500)',
@@ -69,6 +72,8 @@ export type LineChartProps = {
   y: ChartAxis;
   bands?: readonly ChartBand[];
   rules?: readonly ChartRule[];
+  /** Shaded ranges drawn under the series. */
+  areas?: readonly ChartArea[];
   height?: number;
   margin?: ChartMargin;
   /** Caption of the table alternative; defaults to the title. */
@@ -91,6 +96,7 @@ export function LineChart({
   y: yAxis,
   bands = [],
   rules = [],
+  areas = [],
   height = 320,
   margin = DEFAULT_MARGIN,
   tableCaption,
@@ -118,6 +124,16 @@ export function LineChart({
         .defined((p) => Number.isFinite(p.x) && Number.isFinite(p.y))
         .x((p) => x(p.x))
         .y((p) => y(p.y)),
+    [x, y],
+  );
+
+  const areaPath = useMemo(
+    () =>
+      area<{ x: number; lo: number; hi: number }>()
+        .defined((p) => Number.isFinite(p.x) && Number.isFinite(p.lo) && Number.isFinite(p.hi))
+        .x((p) => x(p.x))
+        .y0((p) => y(p.lo))
+        .y1((p) => y(p.hi)),
     [x, y],
   );
 
@@ -263,8 +279,11 @@ export function LineChart({
               );
             })}
 
-            {/* Series. */}
+            {/* Series, over any shaded areas. */}
             <g clipPath={`url(#${CSS.escape(id)}-clip)`}>
+              {areas.map((a) => (
+                <path key={a.id} d={areaPath(a.points as { x: number; lo: number; hi: number }[]) ?? undefined} fill={TONE_COLOURS[a.tone ?? 'frost']} opacity={a.opacity ?? 0.2} aria-label={a.label} />
+              ))}
               {series.map((s, i) => {
                 const colour = colourOf(s, i);
                 return s.pointsOnly ? (
