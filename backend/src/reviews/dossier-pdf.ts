@@ -5,6 +5,9 @@ import PDFDocument from 'pdfkit';
 import type { Dossier } from '@shared/schemas/reviews';
 import { REVIEW_STATE_LABELS, type ReviewState } from '@shared/reviews/state-machine';
 import { hStatementText } from '@shared/hazards/h-statements';
+import { CHEMISTRY_CHECKLIST_LABELS, REGULATORY_CHECKLIST_LABELS } from '@shared/schemas/reviews';
+
+const CHECKLIST_WORDS: Record<string, string> = { ...CHEMISTRY_CHECKLIST_LABELS, ...REGULATORY_CHECKLIST_LABELS };
 
 export type Paper = 'a4' | 'letter';
 
@@ -27,6 +30,8 @@ function printable(text: string): string {
     .replace(/≤/g, '<=')
     .replace(/≥/g, '>=')
     .replace(/→/g, '->')
+    .replace(/≈/g, '~')
+    .replace(/Δ/g, 'Delta ')
     .replace(/[₀-₉]/g, (d) => String(d.charCodeAt(0) - 0x2080));
 }
 
@@ -94,7 +99,7 @@ export function renderDossierPdf(d: Dossier, paper: Paper = 'a4'): Promise<Buffe
   const brief = d.brief as { name?: string; packType?: string; targetTempC?: number; holdMin?: number; reachWithinMin?: number; ambientC?: number };
 
   doc.font(strong).fontSize(18).fillColor('#1d3b36');
-  text(`Candidate dossier — ${c.setNames.join(' + ')}`);
+  text(`Candidate dossier — ${c.setNames.map((n) => n.replace(/\s*\([^)]*\)\s*$/, '')).join(' + ')}`);
   doc.font(body).fontSize(10).fillColor('#333333');
   text(`${d.workspace.name} · candidate ${c.id}, revision ${d.status.revision} · state: ${stateLabel(d.status.state)}`);
   text(`Brief: ${brief.name ?? ''} (${brief.packType ?? ''} pack; target ${fmt(brief.targetTempC)} °C within ${fmt(brief.reachWithinMin, 0)} min, held ${fmt(brief.holdMin, 0)} min; ambient ${fmt(brief.ambientC)} °C)`);
@@ -109,7 +114,8 @@ export function renderDossierPdf(d: Dossier, paper: Paper = 'a4'): Promise<Buffe
   heading('Predicted performance');
   const v = c.verification;
   text(`Time model: ${v.status}${v.reasons.length ? ` — ${v.reasons.join('; ')}` : ''}.`);
-  text(`Reaches the target after ${fmt(v.timeToTargetMin)} min; ${fmt(v.minutesInBand)} min in the band ${fmt(d.band.minC)}–${fmt(d.band.maxC)} °C; coldest ${fmt(v.minTempC)} °C, warmest ${fmt(v.maxTempC)} °C, end ${fmt(v.endTempC)} °C.`);
+  const bandWords = d.band.minC < -100 ? `at or below ${fmt(d.band.maxC)} °C` : d.band.maxC > 300 ? `at or above ${fmt(d.band.minC)} °C` : `${fmt(d.band.minC)}–${fmt(d.band.maxC)} °C`;
+  text(`Reaches the target after ${fmt(v.timeToTargetMin)} min; ${fmt(v.minutesInBand)} min in the band (${bandWords}); coldest ${fmt(v.minTempC)} °C, warmest ${fmt(v.maxTempC)} °C, end ${fmt(v.endTempC)} °C.`);
   drawCurve(doc, d, left, width, body);
 
   heading('Data sources');
@@ -152,7 +158,10 @@ export function renderDossierPdf(d: Dossier, paper: Paper = 'a4'): Promise<Buffe
   if (d.signOffs.length === 0) text('Not signed off yet.');
   for (const s of d.signOffs) {
     const items = Object.entries(s.checklist)
-      .map(([k, val]) => `${k}: ${typeof val === 'object' && val ? JSON.stringify(val) : String(val)}`)
+      .map(([k, val]) => {
+        if (k === 'labLog' && val && typeof val === 'object') return 'attached' in val ? 'lab log attached' : `lab log waived (${(val as { waivedReason: string }).waivedReason})`;
+        return `${CHECKLIST_WORDS[k] ?? k}: ${val === true ? 'yes' : 'no'}`;
+      })
       .join('; ');
     text(`${s.stage === 'chemistry' ? 'Chemistry' : 'Regulatory'} — approved by ${s.reviewer.name} on ${s.createdAt.slice(0, 10)} (revision of candidate ${s.candidateId}). Checklist: ${items}.${s.comment ? ` Comment: ${s.comment}` : ''}`);
   }

@@ -38,7 +38,7 @@ function printCss(paper: Paper): string {
 @media print {
   html, body { background: #fff !important; }
   header:not(.dossier *), nav:not(.dossier *), footer:not(.dossier *), .dossier-toolbar, a[href="#main"] { display: none !important; }
-  main { max-width: none !important; padding: 0 !important; margin: 0 !important; }
+  main { max-width: none !important; padding: 0 12px !important; margin: 0 !important; }
   .dossier { width: auto !important; }
   .dossier button { display: none !important; }
   .dossier { font-size: 10.5pt; }
