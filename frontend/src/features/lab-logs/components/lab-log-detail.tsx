@@ -63,9 +63,10 @@ export function LabLogDetail({ id, canCalibrate }: { id: number; canCalibrate: b
             y={{ label: 'Temperature', unit: '°C' }}
             bands={d.band ? [{ from: Math.max(d.band.minC, -40), to: Math.min(d.band.maxC, 120), label: `Brief’s band${d.briefName ? ` (${d.briefName})` : ''}`, tone: 'moss' }] : []}
             series={[
-              { id: 'measured', label: 'Measured', tone: 'ink', points: measured },
+              // Measured last, so it draws over the model curves it is compared with.
               { id: 'predicted', label: 'Predicted', tone: 'frost', dashed: true, points: d.predicted.curve.map((p) => ({ x: p.tMin, y: p.tempC })) },
-              ...(d.fitted ? [{ id: 'fitted', label: 'Fitted model', tone: 'ember' as const, points: d.fitted.curve.map((p) => ({ x: p.tMin, y: p.tempC })) }] : []),
+              ...(d.fitted ? [{ id: 'fitted', label: 'Fitted model', tone: 'ember' as const, dashed: true, points: d.fitted.curve.map((p) => ({ x: p.tMin, y: p.tempC })) }] : []),
+              { id: 'measured', label: 'Measured', tone: 'ink', points: measured },
             ]}
           />
           <LineChart
