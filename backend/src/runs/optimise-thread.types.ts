@@ -11,7 +11,17 @@ export interface OptimiseThreadInput {
   calibrations?: ModelCalibrations | null;
 }
 
+/** What the process posts to its long-lived optimisation thread: one run, tagged with its id. */
+export interface OptimiseThreadRequest {
+  type: 'run';
+  runId: number;
+  input: OptimiseThreadInput;
+}
+
 export type OptimiseThreadMessage =
   | { type: 'progress'; done: number; total: number }
   | { type: 'result'; result: OptimisationResult & { sweep?: unknown }; elapsedMs: number }
   | { type: 'error'; message: string };
+
+/** What the thread posts back: a message about the run it names. */
+export type OptimiseThreadReply = OptimiseThreadMessage & { runId: number };

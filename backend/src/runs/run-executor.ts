@@ -1,8 +1,8 @@
-import { Worker } from 'node:worker_threads';
 import { sequelize } from '../db/sequelize';
 import { CandidateRecord } from '../candidates/candidate.model';
 import { RunRecord } from './run.model';
-import type { OptimiseThreadInput, OptimiseThreadMessage } from './optimise-thread.types';
+import { optimiseOnThread } from './optimise-pool';
+import type { OptimiseThreadInput } from './optimise-thread.types';
 
 const CANCEL_POLL_MS = 300;
 const PROGRESS_WRITE_MS = 250;
@@ -18,42 +18,20 @@ export async function executeRun(runId: number): Promise<void> {
   await run.update({ status: 'running', attempts: run.attempts + 1, startedAt: run.startedAt ?? new Date(), error: null });
 
   const input: OptimiseThreadInput = { brief: run.briefSnapshot, ingredients: run.dataSnapshot.ingredients, chemistry: run.dataSnapshot.chemistry, calibrations: run.dataSnapshot.calibrations ?? null };
-  const worker = new Worker(new URL('./optimise-thread-boot.mjs', import.meta.url), { workerData: input });
   let lastProgressWrite = 0;
-  let cancelled = false;
-
-  const outcome = await new Promise<OptimiseThreadMessage | { type: 'cancelled' }>((resolve) => {
-    const poll = setInterval(async () => {
-      const current = await RunRecord.findByPk(runId, { attributes: ['status'] }).catch(() => null);
-      if (current?.status === 'cancelled') {
-        cancelled = true;
-        clearInterval(poll);
-        await worker.terminate();
-        resolve({ type: 'cancelled' });
-      }
-    }, CANCEL_POLL_MS);
-    worker.on('message', (message: OptimiseThreadMessage) => {
-      if (message.type === 'progress') {
-        const now = Date.now();
-        if (message.done === message.total || now - lastProgressWrite > PROGRESS_WRITE_MS) {
-          lastProgressWrite = now;
-          void RunRecord.update({ progressDone: message.done, progressTotal: message.total }, { where: { id: runId, status: 'running' } }).catch(() => undefined);
-        }
-        return;
-      }
-      clearInterval(poll);
-      resolve(message);
-    });
-    worker.on('error', (error) => {
-      clearInterval(poll);
-      resolve({ type: 'error', message: error.message });
-    });
-    worker.on('exit', (code) => {
-      clearInterval(poll);
-      if (!cancelled) resolve({ type: 'error', message: `the optimisation stopped unexpectedly (exit code ${code})` });
-    });
+  const handle = optimiseOnThread(runId, input, (done, total) => {
+    const now = Date.now();
+    if (done === total || now - lastProgressWrite > PROGRESS_WRITE_MS) {
+      lastProgressWrite = now;
+      void RunRecord.update({ progressDone: done, progressTotal: total }, { where: { id: runId, status: 'running' } }).catch(() => undefined);
+    }
   });
-  await worker.terminate().catch(() => undefined);
+  // A cancel (the run's status turned `cancelled`) stops the thread; the next run gets a new one.
+  const poll = setInterval(async () => {
+    const current = await RunRecord.findByPk(runId, { attributes: ['status'] }).catch(() => null);
+    if (current?.status === 'cancelled') await handle.cancel();
+  }, CANCEL_POLL_MS);
+  const outcome = await handle.outcome.finally(() => clearInterval(poll));
 
   if (outcome.type === 'cancelled') return;
   if (outcome.type === 'error' || outcome.type === 'progress') {
