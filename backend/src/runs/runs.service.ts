@@ -109,7 +109,7 @@ async function findRun(workspaceId: number, id: number): Promise<RunRecord> {
 export async function getRun(workspaceId: number, id: number): Promise<RunDetail> {
   const run = await findRun(workspaceId, id);
   const [candidates, workspace] = await Promise.all([
-    CandidateRecord.findAll({ where: { runId: run.id, workspaceId }, order: [['rank', 'ASC']] }),
+    CandidateRecord.findAll({ where: { runId: run.id, workspaceId, parentCandidateId: null }, order: [['rank', 'ASC']] }), // revisions live on their candidate's page, not in the run's ranking
     Workspace.findByPk(workspaceId),
   ]);
   const result = run.result;

@@ -23,6 +23,14 @@ export function holdBand(brief: Pick<Brief, 'packType' | 'targetTempC' | 'bandK'
 }
 
 /** Simulated horizon, min: reach + 1.5 × hold, so a margin of up to half the hold can show. */
+/** The band in words: an open end (no surface limit) is left out rather than printed as −273 °C. */
+export function describeBand(band: TargetBand): string {
+  const fmtC = (v: number) => (Math.round(v * 10) / 10).toFixed(1);
+  if (band.minC <= -273) return `at most ${fmtC(band.maxC)} °C`;
+  if (band.maxC >= 1000) return `at least ${fmtC(band.minC)} °C`;
+  return `${fmtC(band.minC)}–${fmtC(band.maxC)} °C`;
+}
+
 export function verificationHorizonMin(brief: Pick<Brief, 'reachWithinMin' | 'holdMin'>): number {
   return brief.reachWithinMin + 1.5 * brief.holdMin;
 }
@@ -100,7 +108,7 @@ export function verifyComposition(
   }
   const inBand = profile.minutesInBand ?? 0;
   if (inBand < brief.holdMin - VERIFY_TOLERANCE_MIN) {
-    reasons.push(`holds ${fmt(band.minC)}–${fmt(band.maxC)} °C for ${fmt(inBand)} min, short of the ${fmt(brief.holdMin)} min asked`);
+    reasons.push(`holds ${describeBand(band)} for ${fmt(inBand)} min, short of the ${fmt(brief.holdMin)} min asked`);
   }
   if (brief.minSurfaceTempC !== null && profile.minTempC < brief.minSurfaceTempC - VERIFY_TOLERANCE_K) {
     reasons.push(`gets as cold as ${fmt(profile.minTempC)} °C, below the ${brief.minSurfaceTempC} °C surface limit`);
