@@ -111,6 +111,10 @@ describe('runs', () => {
     const firstMiss = run.candidates.findIndex((c: { verification: { status: string } }) => c.verification.status === 'missed');
     const lastPass = run.candidates.map((c: { verification: { status: string } }) => c.verification.status).lastIndexOf('passed');
     if (firstMiss >= 0 && lastPass >= 0) expect(lastPass).toBeLessThan(firstMiss);
+    // A target sweep of 10–30 points comes with the run.
+    expect(run.sweep.parameter).toBe('targetTempC');
+    expect(run.sweep.points.length).toBeGreaterThanOrEqual(10);
+    expect(run.sweep.points.length).toBeLessThanOrEqual(30);
     // The run keeps the brief and the data it used.
     expect(run.brief.name).toBe('Run lifecycle brief');
     expect(run.dataSnapshot.ingredients.length).toBeGreaterThanOrEqual(25);

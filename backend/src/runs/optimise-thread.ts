@@ -4,7 +4,8 @@
 // thread; the process starts a new one for the next run (optimise-pool.ts).
 import { parentPort } from 'node:worker_threads';
 import type { ChemistryLibrary } from '@shared/chemistry/types';
-import { runOptimisation } from '@shared/optimiser';
+import { runOptimisation, sweepTarget } from '@shared/optimiser';
+import type { Brief } from '@shared/schemas/briefs';
 import type { OptimiseThreadMessage, OptimiseThreadReply, OptimiseThreadRequest } from './optimise-thread.types';
 
 // Runs of the same workspace carry equal species data; reusing the first copy keeps the
@@ -17,6 +18,18 @@ function sameChemistry(lib: ChemistryLibrary): ChemistryLibrary {
   lastChemistryJson = json;
   lastChemistry = lib;
   return lib;
+}
+
+/**
+ * The target sweep shown beside a run: 13 target temperatures from 6 K on the easy side of the
+ * brief's target to 6 K on the hard side (kept on the right side of ambient), so the designer
+ * sees what each degree costs.
+ */
+function sweepRange(brief: Brief) {
+  const cold = brief.packType === 'cold';
+  const easy = cold ? Math.min(brief.targetTempC + 6, brief.ambientC - 0.5) : Math.max(brief.targetTempC - 6, brief.ambientC + 0.5);
+  const hard = cold ? brief.targetTempC - 6 : brief.targetTempC + 6;
+  return { parameter: 'targetTempC' as const, from: easy, to: hard, points: 13 };
 }
 
 parentPort!.on('message', (request: OptimiseThreadRequest) => {
@@ -39,7 +52,12 @@ parentPort!.on('message', (request: OptimiseThreadRequest) => {
         }
       },
     });
-    post({ type: 'result', result, elapsedMs: performance.now() - started });
+    const optimiseMs = performance.now() - started;
+    const sweep = sweepTarget(
+      { brief: input.brief, ingredients: input.ingredients, chemistry: sameChemistry(input.chemistry), calibrations: input.calibrations ?? null },
+      sweepRange(input.brief),
+    );
+    post({ type: 'result', result: { ...result, sweep }, elapsedMs: optimiseMs });
   } catch (error) {
     post({ type: 'error', message: error instanceof Error ? error.message : String(error) });
   }
