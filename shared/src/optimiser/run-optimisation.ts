@@ -179,12 +179,15 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
   }
 
   // Ties to the simpler mixture: a set whose optimum leaves an active at 0 g is the simpler set.
-  const seen = new Set<string>();
-  const distinct = orderByObjective(working, brief.objective).filter((w) => {
-    if (seen.has(w.effectiveKey)) return false;
-    seen.add(w.effectiveKey);
-    return true;
-  });
+  // Of the sets that come to the same effective mixture, keep the one with the fewest actives
+  // (so no candidate lists an active at 0 g); equal sizes keep the better objective.
+  const bestByKey = new Map<string, Working>();
+  for (const w of orderByObjective(working, brief.objective)) {
+    const kept = bestByKey.get(w.effectiveKey);
+    if (!kept || w.setSize < kept.setSize) bestByKey.set(w.effectiveKey, w);
+  }
+  const keep = new Set(bestByKey.values());
+  const distinct = orderByObjective(working, brief.objective).filter((w) => keep.has(w));
 
   let verified = 0;
   const toVerify = distinct.slice(0, verifyTop);
