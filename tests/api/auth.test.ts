@@ -112,11 +112,11 @@ describe('session', () => {
     expect(res.body.error.code).toBe('route_not_found');
   });
 
-  it('the OpenAPI document lists the foundation routes', async () => {
+  it('the OpenAPI document lists the foundation, optimiser and review routes', async () => {
     const res = await request(h.app).get('/api/openapi.json');
     expect(res.status).toBe(200);
     expect(res.body.openapi).toBe('3.1.0');
-    for (const path of ['/api/auth/login', '/api/auth/me', '/api/users', '/api/users/{id}', '/api/invitations', '/api/invitations/accept', '/api/health', '/api/mail-messages', '/api/auth/password-reset']) {
+    for (const path of ['/api/auth/login', '/api/auth/me', '/api/users', '/api/users/{id}', '/api/invitations', '/api/invitations/accept', '/api/health', '/api/mail-messages', '/api/auth/password-reset', '/api/briefs', '/api/briefs/{id}', '/api/briefs/{id}/runs', '/api/runs/{id}', '/api/runs/{id}/cancel', '/api/candidates/{id}', '/api/candidates/{id}/shortlist', '/api/candidates/compare']) {
       expect(Object.keys(res.body.paths)).toContain(path);
     }
   });

@@ -180,7 +180,7 @@ export const dossierSchema = z.object({
   workspace: z.object({ name: z.string(), currency: z.string() }),
   candidate: candidateRecordSchema,
   status: reviewStatusSchema,
-  brief: z.custom<Record<string, unknown>>(),
+  brief: z.custom<Record<string, unknown>>((v) => typeof v === 'object' && v !== null).meta({ type: 'object', description: 'The brief the candidate answers' }),
   composition: z.array(
     z.object({ ingredientId: z.string(), name: z.string(), grade: z.string(), role: z.string(), massG: z.number(), massFraction: z.number(), sources: z.array(z.string()), hazardSource: z.string().nullable() }),
   ),

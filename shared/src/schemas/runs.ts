@@ -1,12 +1,20 @@
 import { z } from 'zod';
 import { briefSchema, candidateSchema, infeasibleSetSchema } from './briefs';
 
+/**
+ * A complete brief (the output of briefSchema) inside a response. Declared as an object for the
+ * OpenAPI document; its fields are those of briefSchema.
+ */
+const briefSpecSchema = z
+  .custom<z.output<typeof briefSchema>>((v) => typeof v === 'object' && v !== null)
+  .meta({ type: 'object', description: 'A complete brief, defaults applied (see POST /api/briefs)' });
+
 /** A stored brief: its spec (a complete brief, defaults applied) plus record fields. */
 export const briefRecordSchema = z.object({
   id: z.number(),
   name: z.string(),
   packType: z.enum(['cold', 'warm']),
-  spec: z.custom<z.output<typeof briefSchema>>(),
+  spec: briefSpecSchema,
   version: z.number(),
   createdBy: z.string(),
   updatedBy: z.string(),
@@ -57,7 +65,7 @@ export const runDetailSchema = runSummarySchema.extend({
   objective: z.string().nullable(),
   objectiveUnit: z.string().nullable(),
   currency: z.string(),
-  brief: z.custom<z.output<typeof briefSchema>>(),
+  brief: briefSpecSchema,
   candidates: z.array(candidateRecordSchema),
   infeasible: z.array(infeasibleSetSchema),
   excludedIngredients: z.array(z.object({ ingredientId: z.string(), name: z.string(), reason: z.string() })),
@@ -70,5 +78,5 @@ export const runDetailSchema = runSummarySchema.extend({
 export type RunDetail = z.infer<typeof runDetailSchema>;
 export const runListResponseSchema = z.object({ runs: z.array(runSummarySchema) });
 export const createRunResponseSchema = z.object({ runId: z.number() });
-export const candidateResponseSchema = z.object({ candidate: candidateRecordSchema, currency: z.string(), brief: z.custom<z.output<typeof briefSchema>>() });
+export const candidateResponseSchema = z.object({ candidate: candidateRecordSchema, currency: z.string(), brief: briefSpecSchema });
 export const briefIdParamsSchema = z.object({ id: z.coerce.number().int('must be a whole number').positive('must be a positive id') });
