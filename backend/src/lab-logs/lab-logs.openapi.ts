@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { idParamsSchema } from '@shared/schemas';
-import { applyCalibrationSchema, fitRequestSchema, labLogListQuerySchema } from '@shared/schemas/lab-logs';
+import { applyCalibrationSchema, candidateConfidenceResponseSchema, fitRequestSchema, labLogListQuerySchema } from '@shared/schemas/lab-logs';
 import { documentRoute } from '../openapi/registry';
 
 const any = z.object({}).passthrough();
@@ -11,4 +11,4 @@ documentRoute({ method: 'get', path: '/lab-logs/:id', summary: 'One lab log: sam
 documentRoute({ method: 'post', path: '/lab-logs/:id/fit', summary: 'Levenberg–Marquardt fit of UA, enthalpy factor and rate constant to the log, with standard errors', tag: 'lab-logs', roles: ['chemist', 'admin'], params: idParamsSchema, body: fitRequestSchema, response: z.object({ fit: any }) });
 documentRoute({ method: 'get', path: '/calibrations', summary: 'Calibrations of the workspace, active and retired', tag: 'lab-logs', roles: 'any', response: z.object({ calibrations: z.array(any) }) });
 documentRoute({ method: 'post', path: '/calibrations', summary: 'Apply a lab-log fit to a contact case or an ingredient (audited); later runs use it', tag: 'lab-logs', roles: ['chemist', 'admin'], body: applyCalibrationSchema, response: z.object({ calibration: any }) });
-documentRoute({ method: 'get', path: '/candidates/:id/confidence', summary: 'Monte Carlo band (5–95 %) around the predicted curve and the probability of meeting the brief', tag: 'lab-logs', roles: 'any', params: idParamsSchema, response: z.object({ confidence: any }) });
+documentRoute({ method: 'get', path: '/candidates/:id/confidence', summary: 'Monte Carlo band (5–95 %) around the predicted curve and the probability of meeting the brief', tag: 'lab-logs', roles: 'any', params: idParamsSchema, response: candidateConfidenceResponseSchema });

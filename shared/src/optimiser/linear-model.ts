@@ -347,7 +347,9 @@ export interface LinearModel {
  * The rows of the LP of one set (variables m_i ≥ 0, grams, in set order), all linear at the
  * target T*:
  *
- * - heat-budget (≥, J): Σ u_i(T*)·m_i ≥ s·UA·(T_env − T*)·t_hold + s·C_pack·(T₀ − T*).
+ * - heat-budget (≥, J): Σ u_i(T*)·m_i ≥ s·UA·(T_env − T*)·t_hold + s·UA·(T_env − (T₀ + T*)/2)·t_reach
+ *   + s·C_pack·(T₀ − T*): the leak over the hold at the target, the leak while reaching it at
+ *   the mean of start and target (not below 0), and the packaging's sensible heat.
  * - solubility, one per dissolving solid j (≤, g): enough liquid water to dissolve it at T*:
  *   a_j·m_j − s_j(T*)/100 · Σ_i w_i·m_i ≤ 0, a_j = anhydrous g per g, w_i = liquid water per g
  *   (water 1, hydrate water released, reaction water taken). Each solute in water alone, as in
@@ -393,7 +395,10 @@ export function buildLinearModel(set: IngredientSet, coefficients: IngredientCoe
   });
   const useful = coefficients.map((c, i) => usefulHeatJPerG(filmLimited[i] ? { ...c, heatAbsorbedJPerG: 0 } : c, ctx, tStar));
   const exchangeJPerS = ctx.uaWPerK * s * (ctx.envTempC - tStar);
-  const heatBudgetJ = exchangeJPerS * ctx.holdS + s * ctx.packaging.heatCapacityJPerK * (ctx.initialTempC - tStar) + s * filmHeatJ;
+  // Heat also leaks in while the pack is still on its way to the target: over the reach window
+  // the pack is, on average, about halfway between its start and the target.
+  const reachExchangeJ = ctx.uaWPerK * s * (ctx.envTempC - (ctx.initialTempC + tStar) / 2) * ctx.reachWithinS;
+  const heatBudgetJ = exchangeJPerS * ctx.holdS + Math.max(0, reachExchangeJ) + s * ctx.packaging.heatCapacityJPerK * (ctx.initialTempC - tStar) + s * filmHeatJ;
   rows.push({
     id: 'heat-budget',
     kind: 'heat-budget',

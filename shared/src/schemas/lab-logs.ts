@@ -68,3 +68,18 @@ export const applyCalibrationSchema = z
   })
   .refine((b) => b.scope !== 'ingredient' || b.ingredientId !== undefined, { message: 'is required for an ingredient calibration', path: ['ingredientId'] });
 export type ApplyCalibrationRequest = z.infer<typeof applyCalibrationSchema>;
+
+/** GET /api/candidates/:id/confidence: Monte Carlo band around the predicted curve. */
+export const candidateConfidenceSchema = z.object({
+  band: z.array(z.object({ tMin: z.number(), p5: z.number(), p50: z.number(), p95: z.number() })),
+  nominal: z.array(z.object({ tMin: z.number(), tempC: z.number() })),
+  probabilityMeetsBrief: z.number().min(0).max(1).nullable(),
+  samples: z.number().int(),
+  spreads: z.record(z.string(), z.number()),
+  spreadBasis: z.record(z.string(), z.string()),
+  targetBand: z.object({ minC: z.number(), maxC: z.number() }),
+  calibrated: z.boolean(),
+  elapsedMs: z.number(),
+});
+export const candidateConfidenceResponseSchema = z.object({ confidence: candidateConfidenceSchema });
+export type CandidateConfidence = z.infer<typeof candidateConfidenceSchema>;

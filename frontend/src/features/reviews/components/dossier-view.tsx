@@ -8,6 +8,7 @@ import { useHStatements } from '../api/get-h-statements';
 import { HazardNotesList, LabelElements, StandingCaution } from './hazard-notes';
 import { ReviewStateBadge } from './review-state-badge';
 import { ReviewTimeline } from './review-panel';
+import { CandidateConfidence } from '@/components/charts/candidate-confidence';
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -97,6 +98,9 @@ export function DossierView({ dossier: d }: { dossier: Dossier }) {
             />
           </div>
         )}
+        <div className="mt-3 break-inside-avoid">
+          <CandidateConfidence candidateId={c.id} title="How sure the prediction is: 5–95 % band" height={220} />
+        </div>
       </Section>
 
       <Section title="Data sources">

@@ -13,6 +13,7 @@ import { VERIFICATION_WORDS, chemistryName, holdMarginMin, leadActive, objective
 import { briefBand, resampleCurve, useCandidateCurves, type Curve } from '@/lib/candidate-curves';
 import { formatMoney, formatNumber, formatQuantity } from '@/lib/format';
 import { parseSweep } from '../lib/sweep';
+import { CandidateConfidence } from '@/components/charts/candidate-confidence';
 
 type MetricId = 'cost' | 'mass' | 'margin' | 'hazard';
 type Metric = { id: MetricId; label: string; unit: (currency: string) => string; value: (c: CandidateRecord) => number | null; better: 'low' | 'high' };
@@ -200,6 +201,7 @@ function CandidateCurves({ run, focus }: { run: RunDetail; focus: CandidateRecor
             y={{ label: 'Temperature', unit: '°C', format: (v) => formatNumber(v, { maxFractionDigits: 1 }) }}
             tableCaption="Temperature (°C) against time (min) of the selected candidates"
           />
+          <CandidateConfidence candidateId={focus[0]!.id} title={`How sure: #${focus[0]!.rank} ${chemistryName(focus[0]!)}, 5–95 % band`} height={220} />
         </>
       )}
     </div>

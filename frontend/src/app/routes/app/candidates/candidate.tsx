@@ -15,6 +15,7 @@ import { VERIFICATION_WORDS, chemistryName } from '@/lib/candidate-figures';
 import { formatMoney, formatNumber, formatQuantity } from '@/lib/format';
 import { useSessionUser } from '@/lib/session';
 import { requireUser } from '../../../guards';
+import { CandidateConfidence } from '@/components/charts/candidate-confidence';
 
 function idFrom(value: string | undefined): number {
   const id = Number(value);
@@ -146,6 +147,12 @@ export default function CandidateRoute() {
                   height={280}
                 />
               )}
+            </CardBody>
+          </Card>
+          <Card>
+            <CardHeader title="How sure the prediction is" description="Monte Carlo over the uncertainties of enthalpy, heat capacity and heat exchange." />
+            <CardBody>
+              <CandidateConfidence candidateId={c.id} compact height={220} />
             </CardBody>
           </Card>
           <HazardPanel candidateId={c.id} />
