@@ -18,7 +18,7 @@ export default defineConfig({
       },
       {
         resolve: { alias },
-        test: { name: 'api', include: ['tests/api/**/*.test.ts'], environment: 'node', testTimeout: 30_000, hookTimeout: 60_000 },
+        test: { name: 'api', include: ['tests/api/**/*.test.ts'], environment: 'node', testTimeout: 90_000, hookTimeout: 60_000 },
       },
       {
         resolve: { alias },

@@ -18,7 +18,7 @@ afterAll(async () => {
 /** The brief of the designer's story: at most 5 °C within 3 min, held 15 min, ≤ 200 g, ≤ 0.60 a unit. */
 const sideline = { name: 'Sideline cold compress (API test)', packType: 'cold', targetTempC: 5, reachWithinMin: 3, holdMin: 15, maxMassG: 200, maxUnitCost: '0.60' };
 
-async function waitForRun(token: string, runId: number, until: (s: string) => boolean = (s) => !['queued', 'running'].includes(s), timeoutMs = 30_000) {
+async function waitForRun(token: string, runId: number, until: (s: string) => boolean = (s) => !['queued', 'running'].includes(s), timeoutMs = 80_000) {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
     const res = await request(h.app).get(`/api/runs/${runId}`).set(bearer(token));
