@@ -60,7 +60,15 @@ const inert = (role: 'additive' | 'packaging', cp: number, cpSource: string): In
 /** Key of the demo workspace's water. */
 export const DEMO_WATER_KEY = 'water';
 
-/** The demo workspace's library: 37 ingredients — 28 actives, water, 5 additives (3 of them what the iron warmer needs) and 3 packaging items. */
+/** Typical iron-warmer recipes: salt a few % of the iron, carbon and a filler of the order of a third to a half. */
+const IRON_WARMER_NEEDS = [
+  { key: 'sodium-chloride', minGPerG: 0.03, maxGPerG: 0.15, source: PRACTICE },
+  { key: 'activated-carbon', minGPerG: 0.2, maxGPerG: 0.6, source: PRACTICE },
+  { key: 'vermiculite', minGPerG: 0.15, maxGPerG: 0.6, source: PRACTICE },
+  { key: DEMO_WATER_KEY, minGPerG: 0.25, maxGPerG: 0.6, source: PRACTICE },
+];
+
+/** The demo workspace's library: 38 ingredients — 29 actives, water, 5 additives (3 of them what the iron warmer needs) and 3 packaging items. */
 export const DEMO_INGREDIENTS: readonly DemoIngredient[] = [
   // Endothermic dissolution: cold packs.
   {
@@ -213,13 +221,16 @@ export const DEMO_INGREDIENTS: readonly DemoIngredient[] = [
     key: 'iron-powder', name: 'Iron powder', grade: 'Reduced, 100 mesh', role: 'active', process: { kind: 'air-oxidation' },
     costPerKg: '3.10', densityGPerMl: 7.874, sources: [NBS, CRC_DENSITY, 'O2 permeance default: back-calculated from the usual behaviour of disposable hand warmers (assumption)'],
     notes: 'Air oxidation 4Fe + 3O2 → 2Fe2O3 with salt water, activated carbon and vermiculite; the rate is set by oxygen through the pouch film. Flammable solid when very fine.',
-    // Typical warmer recipes: salt a few % of the iron, carbon and a filler of the order of a third to a half.
-    needs: [
-      { key: 'sodium-chloride', minGPerG: 0.03, maxGPerG: 0.15, source: PRACTICE },
-      { key: 'activated-carbon', minGPerG: 0.2, maxGPerG: 0.6, source: PRACTICE },
-      { key: 'vermiculite', minGPerG: 0.15, maxGPerG: 0.6, source: PRACTICE },
-      { key: DEMO_WATER_KEY, minGPerG: 0.25, maxGPerG: 0.6, source: PRACTICE },
-    ],
+    needs: IRON_WARMER_NEEDS,
+  },
+  {
+    // The same powder packed in a reduced-flow microporous film: about 60 % of the default permeance, so
+    // a slim insert against the skin settles at a gentle temperature for hours instead of running hot.
+    key: 'iron-powder-reduced-flow', name: 'Iron powder', grade: 'Reduced, 100 mesh, in reduced-flow film pouch', role: 'active',
+    process: { kind: 'air-oxidation', filmO2Permeance_mol_per_m2_s_Pa: 2.6e-8 },
+    costPerKg: '3.60', densityGPerMl: 7.874, sources: [NBS, CRC_DENSITY, 'reduced-flow film permeance: about 60 % of the default film (invented demo grade; assumption)'],
+    notes: 'As the standard iron powder, in a pouch film that lets about 60 % as much oxygen through: lower, longer heat for gloves and inserts. Long skin contact at 40–44 °C can still cause low-temperature burns.',
+    needs: IRON_WARMER_NEEDS,
   },
   // Solvent, additives, packaging.
   {
