@@ -201,10 +201,10 @@ export function CandidatesTable({
     );
 
   return (
-    <div className="-mx-5 overflow-x-auto">
+    <div className="-mx-5 max-h-[36rem] overflow-auto" tabIndex={0} aria-label="Ranked candidates, scrollable">
       <table className="w-full min-w-[72rem] text-left text-small">
         <caption className="sr-only">Ranked candidates; column headers sort the table</caption>
-        <thead className="border-b border-ink-100 text-caption font-bold text-ink-500">
+        <thead className="sticky top-0 z-10 border-b border-ink-100 bg-surface text-caption font-bold text-ink-500">
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
               {group.headers.map((header) => {
