@@ -1,6 +1,7 @@
 import { useQueries } from '@tanstack/react-query';
 import type { Brief, Candidate } from '@shared/schemas/briefs';
 import { holdBand, verificationHorizonMin } from '@shared/optimiser/verify';
+import { thermalContactCase } from '@shared/optimiser/heat-exchange';
 import type { EvaluateMixtureRequest } from '@shared/schemas/mixtures';
 import { evaluateMixtureApiResponseSchema } from '@shared/schemas/thermo';
 import { api } from './api-client';
@@ -42,7 +43,7 @@ export function briefBand(brief: Brief): { minC: number; maxC: number } {
  */
 export function curveRequest(brief: Brief, candidate: Pick<Candidate, 'composition'>): EvaluateMixtureRequest {
   const exchange =
-    brief.uaWPerK !== null ? { uaWPerK: brief.uaWPerK, packAreaM2: brief.packAreaM2 } : { contact: { case: brief.contact, geometry: { areaM2: brief.packAreaM2 } } };
+    brief.uaWPerK !== null ? { uaWPerK: brief.uaWPerK, packAreaM2: brief.packAreaM2 } : { contact: { case: thermalContactCase(brief.contact), geometry: { areaM2: brief.packAreaM2 } } };
   return {
     components: candidate.composition.filter((c) => c.massG > 0 && c.role !== 'packaging').map((c) => ({ ingredientId: Number(c.ingredientId), massG: c.massG })),
     initialTempC: brief.initialTempC,

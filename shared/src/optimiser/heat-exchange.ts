@@ -9,6 +9,16 @@ export interface HeatExchange {
 }
 
 /**
+ * The thermal model's name for a brief's contact case (the brief says `skin-through-fabric`,
+ * the contact model `skin-fabric`); the other cases share their names.
+ *
+ * @example thermalContactCase('skin-through-fabric') // → 'skin-fabric'
+ */
+export function thermalContactCase(contact: Brief['contact']): 'still-air' | 'skin-fabric' | 'insulated' {
+  return contact === 'skin-through-fabric' ? 'skin-fabric' : contact;
+}
+
+/**
  * UA and exchange temperature of a brief: the brief's `uaWPerK` with its ambient temperature
  * when given, else the thermal model's contact case (thermal/contact.ts: convection plus
  * linearised radiation in still air; fabric and tissue in series to the skin on one face;
@@ -20,7 +30,7 @@ export interface HeatExchange {
  */
 export function resolveHeatExchange(brief: Pick<Brief, 'uaWPerK' | 'contact' | 'packAreaM2' | 'ambientC'>, uaMultiplier = 1): HeatExchange {
   if (brief.uaWPerK !== null && brief.uaWPerK !== undefined) return { uaWPerK: brief.uaWPerK, envTempC: brief.ambientC };
-  const thermalCase = brief.contact === 'skin-through-fabric' ? 'skin-fabric' : brief.contact;
+  const thermalCase = thermalContactCase(brief.contact);
   const c = contactUA({ case: thermalCase, geometry: { areaM2: brief.packAreaM2 } }, brief.ambientC);
   // A lab calibration of the contact case scales the modelled UA (lab-logs/calibrations.ts).
   return { uaWPerK: c.uaWPerK * uaMultiplier, envTempC: c.envTempC };
