@@ -2,7 +2,7 @@ import type { Brief } from '@shared/schemas/briefs';
 import type { IngredientHazardData } from '@shared/schemas/hazards';
 import type { IngredientProcessInput } from '@shared/thermal/process';
 import { candidateHazards, type CandidateHazardsResult } from '@shared/hazards';
-import type { SkinContact } from '@shared/hazards/hazard-notes';
+import { SKIN_CONTACT_BY_CASE } from '@shared/optimiser/candidate-hazards';
 
 export interface HazardInputLine {
   name: string;
@@ -11,11 +11,6 @@ export interface HazardInputLine {
   hazardData: IngredientHazardData | null;
   process?: IngredientProcessInput | null;
   densityGPerMl?: number | null;
-}
-
-/** How the brief's heat-exchange case meets the skin: through fabric when it says so; otherwise contact is possible. */
-export function skinContactOf(brief: Brief): SkinContact {
-  return brief.contact === 'skin-through-fabric' ? 'through-fabric' : 'possible';
 }
 
 /**
@@ -32,9 +27,11 @@ export function hazardsForCandidate(lines: HazardInputLine[], brief: Brief, temp
     predicted: {
       minTempC: temps.minTempC ?? brief.initialTempC,
       maxTempC: temps.maxTempC ?? brief.initialTempC,
-      contact: skinContactOf(brief),
+      // The same skin exposure and venting the optimiser used when it ranked the candidate.
+      contact: SKIN_CONTACT_BY_CASE[brief.contact],
       holdMin: brief.holdMin,
     },
     packType: brief.packType,
+    vented: brief.maxGasL > 0,
   });
 }

@@ -16,11 +16,8 @@ import { formatMoney, formatNumber, formatQuantity } from '@/lib/format';
 import { useSessionUser } from '@/lib/session';
 import { requireUser } from '../../../guards';
 import { CandidateConfidence } from '@/components/charts/candidate-confidence';
+import { idFrom } from '@/lib/route-params';
 
-function idFrom(value: string | undefined): number {
-  const id = Number(value);
-  return Number.isInteger(id) && id > 0 ? id : 0;
-}
 
 export const clientLoader =
   (queryClient: QueryClient) =>

@@ -8,13 +8,10 @@ import { Loading } from '@/components/ui/spinner';
 import { dossierPdfHref, getDossierQueryOptions, useDossier } from '@/features/reviews/api/get-dossier';
 import { DossierView } from '@/features/reviews/components/dossier-view';
 import { requireUser } from '../../../guards';
+import { idFrom } from '@/lib/route-params';
 
 type Paper = 'a4' | 'letter';
 
-function idFrom(value: string | undefined): number {
-  const id = Number(value);
-  return Number.isInteger(id) && id > 0 ? id : 0;
-}
 
 export const clientLoader =
   (queryClient: QueryClient) =>

@@ -12,11 +12,8 @@ import { IngredientHistory } from '@/features/library/components/ingredient-hist
 import { formatDateTime } from '@/lib/format';
 import { hasRole, useSessionUser } from '@/lib/session';
 import { requireUser } from '../../../guards';
+import { idFrom } from '@/lib/route-params';
 
-function idFrom(value: string | undefined): number {
-  const id = Number(value);
-  return Number.isInteger(id) && id > 0 ? id : 0;
-}
 
 export const clientLoader =
   (queryClient: QueryClient) =>

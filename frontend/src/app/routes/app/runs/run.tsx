@@ -8,11 +8,8 @@ import { getRunQueryOptions, useRun } from '@/features/runs/api/get-run';
 import { RunView } from '@/features/runs/components/run-view';
 import { hasRole, useSessionUser } from '@/lib/session';
 import { requireUser } from '../../../guards';
+import { idFrom } from '@/lib/route-params';
 
-function idFrom(value: string | undefined): number {
-  const id = Number(value);
-  return Number.isInteger(id) && id > 0 ? id : 0;
-}
 
 export const clientLoader =
   (queryClient: QueryClient) =>
