@@ -53,7 +53,7 @@ try {
   await buildFrontendIfStale(env);
 
   const steps: [string, string, string[]][] = onlyE2e
-    ? [['e2e', bin('vitest'), ['run', '--project', 'e2e', ...vitestArgs]]]
+    ? [['e2e', bin('vitest'), ['run', '--project', 'e2e', '--reporter=default', '--reporter=json', `--outputFile.json=${path.join(scratch, 'vitest.json')}`, ...vitestArgs]]]
     : [
         ['typecheck', bin('tsc'), ['--noEmit', '-p', 'tsconfig.json']],
         ['lint', bin('eslint'), ['--max-warnings', '0', '.']],

@@ -45,8 +45,8 @@ export function createApp(options: AppOptions = {}): Express {
   const staticDir = options.staticDir === undefined ? path.join(projectRoot, 'dist') : options.staticDir;
   if (staticDir && existsSync(path.join(staticDir, 'index.html'))) {
     app.use(express.static(staticDir, { index: false, maxAge: '1h' }));
-    // Client-side routes: every non-API GET answers the SPA's index.html.
-    app.get('/*splat', (_req, res) => res.sendFile(path.join(staticDir, 'index.html')));
+    // Client-side routes: every non-API GET, the root included, answers the SPA's index.html.
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(staticDir, 'index.html')));
   }
   app.use(errorHandler);
   return app;

@@ -47,6 +47,21 @@ describe('foundation in the browser', () => {
     await context.close();
   });
 
+  it('the address a newcomer types — the root — serves the app, and deep links load too', async () => {
+    const { context, page } = await b.newPage();
+    const root = await page.goto('/');
+    expect(root?.status()).toBe(200);
+    await page.getByLabel('E-mail').waitFor();
+    expect(new URL(page.url()).pathname).toBe('/sign-in');
+    await b.signIn(page, 'designer@demo.test');
+    const home = await page.goto('/');
+    expect(home?.status()).toBe(200);
+    await page.getByRole('main').waitFor();
+    const deep = await page.goto('/briefs');
+    expect(deep?.status()).toBe(200);
+    await context.close();
+  });
+
   it('each demo role signs in and sees its own home', async () => {
     for (const role of ['designer', 'chemist', 'reviewer'] as const) {
       const { context, page } = await b.newPage();
