@@ -12,7 +12,8 @@ import { defaultChemistryLibrary } from '../../shared/src/chemistry';
 import { DEMO_BRIEFS, DEMO_LIBRARY } from '../../shared/src/optimiser/demo-library';
 import { runOptimisation } from '../../shared/src/optimiser/run-optimisation';
 import { briefSchema } from '../../shared/src/schemas/briefs';
-import { chemistryPort } from '../../shared/src/thermal/chemistry-adapter';
+import { chemistryModelFor } from '../../shared/src/evaluation/chemistry-cache';
+import { componentsOf, linesOfComposition } from '../../shared/src/evaluation/components';
 import { briefScenario, calibrateToLog, meetsBrief, monteCarloBand } from '../../shared/src/lab-logs';
 import { syntheticSamples } from '../../shared/src/lab-logs/__fixtures__/synthetic-log';
 
@@ -25,7 +26,7 @@ export interface LabLogsBenchReport {
 
 export function runLabLogsBench(): LabLogsBenchReport {
   const lib = defaultChemistryLibrary();
-  const port = chemistryPort(lib);
+  const port = chemistryModelFor(lib);
   const brief = briefSchema.parse(DEMO_BRIEFS[0]);
   let t = performance.now();
   const result = runOptimisation({ brief, ingredients: DEMO_LIBRARY, chemistry: lib }, { port });
@@ -35,12 +36,8 @@ export function runLabLogsBench(): LabLogsBenchReport {
     .filter((c) => c.verification.status !== 'not-verified')
     .slice(0, 5)
     .map((c) => {
-      const components = c.composition
-        .filter((x) => x.massG > 0)
-        .map((x) => {
-          const ing = byId.get(x.ingredientId)!;
-          return { key: x.ingredientId, massG: x.massG, process: ing.process ?? { kind: 'inert' as const, role: ing.role === 'solvent' ? ('water' as const) : ('additive' as const) } };
-        });
+      // The candidate's components as the evaluation core builds them (evaluation/components.ts).
+      const components = componentsOf(linesOfComposition(c.composition, byId).lines);
       const s = performance.now();
       const mc = monteCarloBand(port, briefScenario(brief, components), { samples: 200, meets: (p) => meetsBrief(brief, p) });
       return { candidate: c.setNames.join(' + '), ms: performance.now() - s, probabilityMeetsBrief: mc.probabilityMeetsBrief };

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { idParamsSchema } from '@shared/schemas';
 import { requireAuth, requireRole } from '../auth/auth.middleware';
 import { validate, validated } from '../http/validate';
-import { compareCandidates, getCandidate, listShortlisted, setShortlisted } from './candidates.service';
+import { compareCandidates, getCandidate, getCandidateCurve, listShortlisted, setShortlisted } from './candidates.service';
 import './candidates.openapi';
 
 export const compareQuerySchema = z.object({
@@ -29,6 +29,11 @@ candidatesRouter.get('/compare', validate({ query: compareQuerySchema }), async 
 candidatesRouter.get('/:id', validate({ params: idParamsSchema }), async (req, res) => {
   const { params } = validated(res, { params: idParamsSchema });
   res.json(await getCandidate(req.user!.workspaceId, params.id));
+});
+
+candidatesRouter.get('/:id/curve', validate({ params: idParamsSchema }), async (req, res) => {
+  const { params } = validated(res, { params: idParamsSchema });
+  res.json(await getCandidateCurve(req.user!.workspaceId, params.id));
 });
 
 candidatesRouter.post('/:id/shortlist', requireRole('designer', 'admin'), validate({ params: idParamsSchema, body: shortlistBodySchema }), async (req, res) => {

@@ -1,6 +1,8 @@
 import { Op } from 'sequelize';
 import type { CandidateRecord as CandidateDto } from '@shared/schemas/runs';
 import type { Brief } from '@shared/schemas/briefs';
+import type { CandidateCurve } from '@shared/schemas/runs';
+import { holdBand, verifyComposition } from '@shared/evaluation/verify';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
 import { recordAudit } from '../audit/audit.service';
@@ -9,15 +11,38 @@ import { RunRecord } from '../runs/run.model';
 import { toCandidateDto } from '../runs/runs.service';
 import { Workspace } from '../workspaces/workspace.model';
 import { CandidateRecord } from './candidate.model';
+import { findCandidateRow, loadCandidateContext, type CandidateContext } from './candidate-context';
 
 export async function getCandidate(workspaceId: number, id: number): Promise<{ candidate: CandidateDto; currency: string; brief: Brief }> {
-  const candidate = await CandidateRecord.findOne({ where: { id, workspaceId } });
-  if (!candidate) throw AppError.notFound('Candidate');
+  const candidate = await findCandidateRow(workspaceId, id);
   const [run, workspace] = await Promise.all([
-    RunRecord.findByPk(candidate.runId, { attributes: ['briefSnapshot'] }),
+    RunRecord.findOne({ where: { id: candidate.runId, workspaceId }, attributes: ['briefSnapshot'] }),
     Workspace.findByPk(workspaceId),
   ]);
   return { candidate: toCandidateDto(candidate), currency: workspace?.currency ?? 'EUR', brief: run!.briefSnapshot };
+}
+
+/**
+ * A candidate's temperature curve as its run verified it: the evaluation core over the
+ * verification horizon with the run's brief, data snapshot (packaging lines included) and
+ * calibrations. Empty when an ingredient can no longer be found or the model cannot run it.
+ */
+export function candidateCurve(ctx: CandidateContext): CandidateCurve {
+  const band = holdBand(ctx.brief);
+  if (ctx.missing.length || !ctx.lines.some((l) => l.massG > 0)) return { curve: [], band, timeToTargetMin: null, minutesInBand: null, error: ctx.missing.length ? `ingredients ${ctx.missing.join(', ')} are no longer in the library or the run's data` : 'no ingredient above 0 g' };
+  const v = verifyComposition(ctx.chemistry, ctx.brief, ctx.lines, { calibrations: ctx.calibrations });
+  return {
+    curve: v.profile?.curve.map((p) => ({ tMin: p.tMin, tempC: p.tempC })) ?? [],
+    band,
+    timeToTargetMin: v.timeToTargetMin,
+    minutesInBand: v.minutesInBand,
+    error: v.status === 'failed' ? (v.reasons[0] ?? 'the time model could not run this candidate') : null,
+  };
+}
+
+/** GET /api/candidates/:id/curve. */
+export async function getCandidateCurve(workspaceId: number, id: number): Promise<CandidateCurve> {
+  return candidateCurve(await loadCandidateContext(workspaceId, id));
 }
 
 /** Several candidates of the workspace at once, for side-by-side comparison (2–4). */
@@ -31,8 +56,7 @@ export async function compareCandidates(workspaceId: number, ids: number[]): Pro
 /** Marks a proposed candidate as shortlisted (or takes it off the shortlist). */
 export async function setShortlisted(actor: AuthUser, id: number, shortlisted: boolean): Promise<CandidateDto> {
   return sequelize.transaction(async (transaction) => {
-    const candidate = await CandidateRecord.findOne({ where: { id, workspaceId: actor.workspaceId }, transaction, lock: transaction.LOCK.UPDATE });
-    if (!candidate) throw AppError.notFound('Candidate');
+    const candidate = await findCandidateRow(actor.workspaceId, id, { transaction, lock: true });
     const from = candidate.state;
     const to = shortlisted ? 'shortlisted' : 'proposed';
     if (from !== 'proposed' && from !== 'shortlisted') {

@@ -11,26 +11,26 @@ import {
   previewLog,
   simulateScenario,
   SPREAD_BASIS,
-  applyIngredientCalibrations,
-  enthalpyFactorsBySolute,
-  scaledEnthalpyPort,
+  contactUaMultiplier,
   thin,
   type LabScenario,
   type LogPreview,
   type ModelCalibrations,
   type RowError,
 } from '@shared/lab-logs';
-import type { OptimiserIngredient } from '@shared/optimiser/types';
 import type { ApplyCalibrationRequest, CreateLabLogRequest } from '@shared/schemas/lab-logs';
-import { holdBand } from '@shared/optimiser/verify';
-import { chemistryPort, packAreaM2, processForFormula, type ChemistryPort, type IngredientProcessInput, type ThermalComponent } from '@shared/thermal';
+import { chemistryModelFor } from '@shared/evaluation/chemistry-cache';
+import { componentsOf, lineOf } from '@shared/evaluation/components';
+import { holdBand } from '@shared/evaluation/verify';
+import { packAreaM2, processForFormula, type ChemistryPort, type ThermalComponent } from '@shared/thermal';
 import type { Brief, Candidate } from '@shared/schemas/briefs';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthUser } from '../auth/session-user';
 import { CandidateRecord } from '../candidates/candidate.model';
-import { RunRecord } from '../runs/run.model';
+import { loadCandidateContext } from '../candidates/candidate-context';
+import { toOptimiserIngredient } from '../runs/runs.service';
 import { IngredientRecord } from '../ingredients/ingredient.model';
 import { workspaceChemistryLibrary } from '../species/species.service';
 import { UserRecord } from '../users/user.model';
@@ -42,32 +42,10 @@ export const LAB_LOG_MAX_BYTES = 4 * 1024 * 1024;
 /** Monte Carlo samples per candidate. */
 export const CONFIDENCE_SAMPLES = 200;
 
-// ---- chemistry ports: sampling the curves costs a few ms per solute, so keep them ------------
-const workspacePorts = new Map<number, { stamp: string; port: ChemistryPort }>();
-const runPorts = new Map<number, ChemistryPort>();
-
-function stampOf(lib: ChemistryLibrary): string {
-  return createHash('sha1').update(JSON.stringify(lib.species.map((s) => [s.key, s.dfH_kJ_per_mol, s.Cp_J_per_mol_K]))).digest('hex');
-}
-
+// ---- chemistry: the one cache of the chemistry model per library revision (evaluation/chemistry-cache.ts)
 async function workspacePort(workspaceId: number): Promise<{ port: ChemistryPort; lib: ChemistryLibrary }> {
   const lib = await workspaceChemistryLibrary(workspaceId);
-  const stamp = stampOf(lib);
-  const cached = workspacePorts.get(workspaceId);
-  if (cached && cached.stamp === stamp) return { port: cached.port, lib };
-  const port = chemistryPort(lib);
-  workspacePorts.set(workspaceId, { stamp, port });
-  return { port, lib };
-}
-
-function runPort(runId: number, lib: ChemistryLibrary): ChemistryPort {
-  let p = runPorts.get(runId);
-  if (!p) {
-    if (runPorts.size > 20) runPorts.clear();
-    p = chemistryPort(lib);
-    runPorts.set(runId, p);
-  }
-  return p;
+  return { port: chemistryModelFor(lib), lib };
 }
 
 // ---- preview ---------------------------------------------------------------------------------
@@ -94,32 +72,15 @@ function rowErrorsToApp(message: string, errors: RowError[], more = 0): AppError
 
 // ---- the mixture behind a log ----------------------------------------------------------------
 
-function inertFor(role: string, cpJPerGK: number | null | undefined): IngredientProcessInput {
-  return { kind: 'inert', role: role === 'solvent' ? 'water' : role === 'packaging' ? 'packaging' : 'additive', ...(cpJPerGK ? { cp_J_per_gK: cpJPerGK } : {}) };
-}
-
-/** Components of a candidate as the verification builds them (optimiser/verify.ts). */
-function candidateComponents(candidate: Candidate, ingredients: readonly OptimiserIngredient[]): ThermalComponent[] {
-  const byId = new Map(ingredients.map((i) => [i.id, i]));
-  return candidate.composition
-    .filter((c) => c.massG > 0)
-    .map((c) => {
-      const ing = byId.get(c.ingredientId);
-      return { key: c.ingredientId, massG: c.massG, process: ing?.process ?? inertFor(c.role, ing?.cpJPerGK) };
-    });
-}
-
 async function scenarioFor(actor: AuthUser, meta: CreateLabLogRequest, lib: ChemistryLibrary, firstTempC: number, horizonMin: number): Promise<LabScenario> {
   const c = meta.conditions;
   let components: ThermalComponent[];
   let packHeatCapacityJPerK = 24;
   let briefArea: number | null = null;
   if (meta.candidateId !== undefined) {
-    const cand = await CandidateRecord.findOne({ where: { id: meta.candidateId, workspaceId: actor.workspaceId } });
-    if (!cand) throw AppError.notFound('Candidate');
-    const run = await RunRecord.findByPk(cand.runId, { attributes: ['briefSnapshot', 'dataSnapshot'] });
-    components = candidateComponents(cand.data, run!.dataSnapshot.ingredients);
-    const brief = run!.briefSnapshot as Brief;
+    const ctx = await loadCandidateContext(actor.workspaceId, meta.candidateId);
+    components = componentsOf(ctx.lines);
+    const brief = ctx.brief;
     packHeatCapacityJPerK = brief.packaging.heatCapacityJPerK;
     briefArea = brief.packAreaM2;
   } else {
@@ -132,7 +93,7 @@ async function scenarioFor(actor: AuthUser, meta: CreateLabLogRequest, lib: Chem
       if (x.ingredientId !== undefined) {
         const r = byId.get(x.ingredientId);
         if (!r) return fields.push({ field: `components.${k}.ingredientId`, message: 'is not an ingredient of this workspace' });
-        components.push({ key: String(r.id), massG: x.massG, process: r.process ?? inertFor(r.role, r.cpJPerGK) });
+        components.push(...componentsOf([lineOf(toOptimiserIngredient(r), x.massG)]));
       } else {
         try {
           components.push({ key: x.formula!, formula: x.formula!, massG: x.massG, process: processForFormula(lib, x.formula!) });
@@ -268,10 +229,9 @@ export async function getLabLog(workspaceId: number, id: number) {
   let band: { minC: number; maxC: number } | null = null;
   let brief: Brief | null = null;
   if (r.candidateId !== null) {
-    const cand = await CandidateRecord.findOne({ where: { id: r.candidateId, workspaceId }, attributes: ['runId'] });
-    const run = cand ? await RunRecord.findByPk(cand.runId, { attributes: ['briefSnapshot'] }) : null;
-    if (run) {
-      brief = run.briefSnapshot as Brief;
+    const ctx = await loadCandidateContext(workspaceId, r.candidateId).catch(() => null);
+    if (ctx) {
+      brief = ctx.brief;
       band = holdBand(brief);
     }
   }
@@ -465,19 +425,16 @@ export interface ConfidenceDto {
  * calibrations its run used; computed once and kept in the candidate's data.
  */
 export async function candidateConfidence(workspaceId: number, id: number): Promise<ConfidenceDto> {
-  const cand = await CandidateRecord.findOne({ where: { id, workspaceId } });
-  if (!cand) throw AppError.notFound('Candidate');
+  const ctx = await loadCandidateContext(workspaceId, id);
+  const cand = ctx.candidate;
   const cached = (cand.data as Candidate & { confidence?: ConfidenceDto }).confidence;
   if (cached && cached.samples > 0) return cached;
-  const run = await RunRecord.findByPk(cand.runId, { attributes: ['id', 'briefSnapshot', 'dataSnapshot'] });
-  if (!run) throw AppError.notFound('Run');
-  const brief = run.briefSnapshot as Brief;
-  const snapshot = run.dataSnapshot as typeof run.dataSnapshot & { calibrations?: ModelCalibrations };
-  const calibrations = snapshot.calibrations ?? null;
-  const ingredients = applyIngredientCalibrations(snapshot.ingredients, calibrations);
-  const port = scaledEnthalpyPort(runPort(run.id, snapshot.chemistry), enthalpyFactorsBySolute(ingredients, calibrations));
-  const uaMultiplier = brief.uaWPerK === null || brief.uaWPerK === undefined ? (calibrations?.contacts?.[brief.contact]?.uaMultiplier ?? 1) : 1;
-  const scenario = briefScenario(brief, candidateComponents(cand.data, ingredients), uaMultiplier);
+  const brief = ctx.brief;
+  const calibrations = ctx.calibrations;
+  // The run's calibrations go through the evaluation core with the scenario.
+  const port = chemistryModelFor(ctx.chemistry);
+  const uaMultiplier = contactUaMultiplier(calibrations, brief.contact, brief.uaWPerK !== null && brief.uaWPerK !== undefined);
+  const scenario = briefScenario(brief, componentsOf(ctx.lines), calibrations);
   const started = performance.now();
   let mc;
   try {

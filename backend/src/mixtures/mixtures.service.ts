@@ -1,29 +1,14 @@
-import { FormulaError, UnknownSpeciesError } from '@shared/chemistry';
-import type { ChemistryLibrary, ComputationWarning } from '@shared/chemistry/types';
-import type { EvaluateMixtureApiResponse, FieldError } from '@shared/schemas';
-import type { EvaluateMixtureRequest, ResolvedMixture } from '@shared/schemas/mixtures';
-import { ThermalModelError, chemistryPort, evaluateMixture, processForFormula, type ChemistryPort, type IngredientProcessInput } from '@shared/thermal';
+import { UnknownSpeciesError } from '@shared/chemistry';
+import type { ComputationWarning } from '@shared/chemistry/types';
+import type { EvaluateMixtureApiResponse } from '@shared/schemas';
+import type { EvaluateMixtureRequest } from '@shared/schemas/mixtures';
+import { evaluateMixture } from '@shared/evaluation/evaluate-mixture';
+import { resolveMixtureRequest } from '@shared/evaluation/resolve-mixture';
+import { ThermalModelError } from '@shared/thermal';
 import { AppError } from '../http/errors';
 import type { AuthUser } from '../auth/session-user';
 import { formatCost, ingredientsByIds } from '../ingredients/ingredients.service';
 import { workspaceChemistryLibrary } from '../species/species.service';
-
-// Sampling the chemistry curves for the port costs a few milliseconds per solute; keep the port
-// of the last library each workspace used while its species rows are unchanged.
-const portCache = new Map<number, { stamp: string; port: ChemistryPort }>();
-
-function libraryStamp(lib: ChemistryLibrary): string {
-  return lib.species.map((s) => `${s.key}:${s.dfH_kJ_per_mol}:${s.S_J_per_mol_K}:${s.Cp_J_per_mol_K}:${s.molarMass_g_per_mol}`).join('|');
-}
-
-function portFor(workspaceId: number, lib: ChemistryLibrary): ChemistryPort {
-  const stamp = libraryStamp(lib);
-  const cached = portCache.get(workspaceId);
-  if (cached && cached.stamp === stamp) return cached.port;
-  const port = chemistryPort(lib);
-  portCache.set(workspaceId, { stamp, port });
-  return port;
-}
 
 /** Σ costPerKg × massG / 1000 in exact decimal arithmetic (1e-4 currency units × milligrams). */
 function decimalCost(lines: { costPerKg: string; massG: number }[]): string {
@@ -48,47 +33,19 @@ export async function evaluateMixtureFor(actor: AuthUser, request: EvaluateMixtu
   const lib = await workspaceChemistryLibrary(actor.workspaceId);
   const ids = request.components.flatMap((c) => (c.ingredientId === undefined ? [] : [c.ingredientId]));
   const ingredients = await ingredientsByIds(actor.workspaceId, ids);
-  const fields: FieldError[] = [];
   const warnings: ComputationWarning[] = [];
-  const costLines: { costPerKg: string; massG: number; currency: string }[] = [];
-  let costComplete = true;
-  const components: ResolvedMixture['components'] = [];
-  const described: EvaluateMixtureApiResponse['components'] = [];
+  const r = resolveMixtureRequest(lib, ingredients, request);
+  if (!r.ok) throw AppError.validation(`Invalid mixture: ${r.fields.map((f) => `${f.field}: ${f.message}`).join('; ')}`, r.fields);
+  const described: EvaluateMixtureApiResponse['components'] = r.resolved.map((c) =>
+    c.ingredient ? { ingredientId: c.ingredient.id, formula: null, name: c.ingredient.name, massG: c.massG, processKind: c.process.kind } : { ingredientId: null, formula: c.formula, name: c.formula, massG: c.massG, processKind: c.process.kind },
+  );
+  const costLines = r.resolved.flatMap((c) => (c.ingredient ? [{ costPerKg: c.ingredient.costPerKg, massG: c.massG, currency: c.ingredient.currency }] : []));
+  const costComplete = r.resolved.every((c) => c.ingredient || c.massG === 0);
 
-  request.components.forEach((c, k) => {
-    if (c.ingredientId !== undefined) {
-      const ing = ingredients.get(c.ingredientId);
-      if (!ing) {
-        fields.push({ field: `components.${k}.ingredientId`, message: `no ingredient ${c.ingredientId} in this workspace's library` });
-        return;
-      }
-      const process: IngredientProcessInput =
-        ing.process ??
-        (ing.role === 'solvent'
-          ? { kind: 'inert', role: 'water' }
-          : { kind: 'inert', role: ing.role === 'packaging' ? 'packaging' : 'additive', ...(ing.cpJPerGK ? { cp_J_per_gK: ing.cpJPerGK } : {}) });
-      components.push({ key: `${ing.name}${ing.grade ? ` (${ing.grade})` : ''}`, massG: c.massG, process });
-      described.push({ ingredientId: ing.id, formula: null, name: ing.name, massG: c.massG, processKind: process.kind });
-      costLines.push({ costPerKg: ing.costPerKg, massG: c.massG, currency: ing.currency });
-    } else {
-      const formula = c.formula as string;
-      try {
-        const process = processForFormula(lib, formula);
-        components.push({ formula, massG: c.massG, process });
-        described.push({ ingredientId: null, formula, name: formula, massG: c.massG, processKind: process.kind });
-        if (c.massG > 0) costComplete = false;
-      } catch (error) {
-        if (error instanceof UnknownSpeciesError || error instanceof FormulaError) fields.push({ field: `components.${k}.formula`, message: error.message });
-        else throw error;
-      }
-    }
-  });
-  if (fields.length) throw AppError.validation(`Invalid mixture: ${fields.map((f) => `${f.field}: ${f.message}`).join('; ')}`, fields);
-
-  const { components: _ignored, ...conditions } = request;
   let result;
   try {
-    result = evaluateMixture(portFor(actor.workspaceId, lib), { ...conditions, components });
+    // The library's chemistry model comes from the one cache (evaluation/chemistry-cache.ts).
+    result = evaluateMixture(lib, r.mixture);
   } catch (error) {
     if (error instanceof ThermalModelError || error instanceof UnknownSpeciesError) {
       const path = error instanceof ThermalModelError ? (error.field ?? '') : '';

@@ -12,14 +12,16 @@ import {
   type ReviewAction,
   type ReviewState,
 } from '@shared/reviews/state-machine';
-import { verifyComposition } from '@shared/optimiser/verify';
-import { chemistryPort } from '@shared/thermal';
+import { lineOf } from '@shared/evaluation/components';
+import { verifyComposition } from '@shared/evaluation/verify';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import { AuditEventRecord } from '../audit/audit-event.model';
 import type { AuthUser } from '../auth/session-user';
 import { CandidateRecord } from '../candidates/candidate.model';
+import { findCandidateRow } from '../candidates/candidate-context';
+import { activeCalibrations } from '../lab-logs/lab-logs.service';
 import { RunRecord } from '../runs/run.model';
 import { toCandidateDto, toOptimiserIngredient } from '../runs/runs.service';
 import { IngredientRecord } from '../ingredients/ingredient.model';
@@ -42,10 +44,8 @@ CandidateRecord.addHook('beforeUpdate', (candidate: CandidateRecord) => {
   }
 });
 
-async function findCandidate(workspaceId: number, id: number, transaction?: Transaction, lock = false): Promise<CandidateRecord> {
-  const candidate = await CandidateRecord.findOne({ where: { id, workspaceId }, transaction, ...(lock && transaction ? { lock: transaction.LOCK.UPDATE } : {}) });
-  if (!candidate) throw AppError.notFound('Candidate');
-  return candidate;
+function findCandidate(workspaceId: number, id: number, transaction?: Transaction, lock = false): Promise<CandidateRecord> {
+  return findCandidateRow(workspaceId, id, { ...(transaction ? { transaction } : {}), lock });
 }
 
 export async function childOf(workspaceId: number, id: number, transaction?: Transaction): Promise<CandidateRecord | null> {
@@ -128,10 +128,11 @@ export async function reviseCandidate(actor: AuthUser, id: number, body: ReviseB
   transitionOrThrow(parentProbe.state, 'revise', actor.role);
 
   const ids = [...new Set(body.composition.map((c) => c.ingredientId))];
-  const [ingredients, lib, run] = await Promise.all([
+  const [ingredients, lib, run, calibrations] = await Promise.all([
     IngredientRecord.findAll({ where: { workspaceId: actor.workspaceId, id: { [Op.in]: ids } } }),
     workspaceChemistryLibrary(actor.workspaceId),
     RunRecord.findByPk(parentProbe.runId, { attributes: ['id', 'briefSnapshot'] }),
+    activeCalibrations(actor.workspaceId),
   ]);
   const byId = new Map(ingredients.map((i) => [i.id, i]));
   const fields: FieldError[] = [];
@@ -144,12 +145,9 @@ export async function reviseCandidate(actor: AuthUser, id: number, body: ReviseB
 
   const brief = run!.briefSnapshot as Brief;
   const lines = body.composition.filter((c) => c.massG > 0).map((c) => ({ record: byId.get(c.ingredientId)!, massG: c.massG }));
-  const verification = verifyComposition(
-    chemistryPort(lib),
-    brief,
-    lines.map((l) => ({ ingredient: toOptimiserIngredient(l.record), massG: l.massG })),
-  );
-  const { profile: _profile, ...verificationOnly } = verification;
+  // The edited composition is checked against today's library and today's calibrations (the run's may be stale).
+  const verification = verifyComposition(lib, brief, lines.map((l) => lineOf(toOptimiserIngredient(l.record), l.massG)), { calibrations });
+  const { profile: _profile, evaluation: _evaluation, ...verificationOnly } = verification;
   // In the order of the parent's set, so the names keep their order; new actives follow.
   const order = (id: number) => {
     const k = parentProbe.data.setIds.indexOf(String(id));

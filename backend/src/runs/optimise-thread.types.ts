@@ -1,4 +1,4 @@
-import type { ModelCalibrations } from '@shared/lab-logs/calibrations';
+import type { ModelCalibrations } from '@shared/calibration/calibrations';
 import type { Brief, OptimisationResult } from '@shared/schemas/briefs';
 import type { ChemistryLibrary } from '@shared/chemistry/types';
 import type { OptimiserIngredient } from '@shared/optimiser/types';

@@ -1,4 +1,4 @@
-import type { ModelCalibrations } from '@shared/lab-logs/calibrations';
+import type { ModelCalibrations } from '@shared/calibration/calibrations';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute } from 'sequelize';
 import type { Brief, OptimisationResult } from '@shared/schemas/briefs';
 import type { RunStatus } from '@shared/schemas/runs';

@@ -1,9 +1,7 @@
 import { useQueries } from '@tanstack/react-query';
 import type { Brief, Candidate } from '@shared/schemas/briefs';
-import { holdBand, verificationHorizonMin } from '@shared/optimiser/verify';
-import { thermalContactCase } from '@shared/optimiser/heat-exchange';
-import type { EvaluateMixtureRequest } from '@shared/schemas/mixtures';
-import { evaluateMixtureApiResponseSchema } from '@shared/schemas/thermo';
+import { holdBand } from '@shared/evaluation/verify';
+import { candidateCurveSchema } from '@shared/schemas/runs';
 import { api } from './api-client';
 
 /** A temperature curve, °C against minutes. */
@@ -25,39 +23,22 @@ export function resampleCurve(curve: Curve, stepMin: number, endMin: number): { 
   return out;
 }
 
-/** The evaluate endpoint's temperature limits, °C (shared/schemas/mixtures.ts). */
-const EVAL_MIN_C = -80;
-const EVAL_MAX_C = 400;
+/** Drawing limits of a band, °C: an open end (no surface limit) is clipped to what a chart shows. */
+const DRAW_MIN_C = -80;
+const DRAW_MAX_C = 400;
 
-/** The band a held pack must stay in (as the optimiser verifies it), clipped to what can be drawn. */
+/** The band a held pack must stay in (as the verification judges it), clipped to what can be drawn. */
 export function briefBand(brief: Brief): { minC: number; maxC: number } {
   const band = holdBand(brief);
-  return { minC: Math.max(EVAL_MIN_C, band.minC), maxC: Math.min(EVAL_MAX_C, band.maxC) };
+  return { minC: Math.max(DRAW_MIN_C, band.minC), maxC: Math.min(DRAW_MAX_C, band.maxC) };
 }
 
 /**
- * The POST /api/mixtures/evaluate request that replays a candidate against its brief, as the
- * optimiser's verification does: its composition (fill only), the brief's start, surroundings
- * (UA when given, else the contact case over the pack's area), the packaging's heat capacity,
- * and a horizon of reach + 1.5 × hold so a margin can show.
+ * A candidate's curve from GET /api/candidates/:id/curve: the server replays it through the
+ * evaluation core with its run's data snapshot, packaging and calibrations, as the run verified it.
  */
-export function curveRequest(brief: Brief, candidate: Pick<Candidate, 'composition'>): EvaluateMixtureRequest {
-  const exchange =
-    brief.uaWPerK !== null ? { uaWPerK: brief.uaWPerK, packAreaM2: brief.packAreaM2 } : { contact: { case: thermalContactCase(brief.contact), geometry: { areaM2: brief.packAreaM2 } } };
-  return {
-    components: candidate.composition.filter((c) => c.massG > 0 && c.role !== 'packaging').map((c) => ({ ingredientId: Number(c.ingredientId), massG: c.massG })),
-    initialTempC: brief.initialTempC,
-    ambientC: brief.ambientC,
-    ...exchange,
-    packHeatCapacityJPerK: brief.packaging.heatCapacityJPerK,
-    holdMin: verificationHorizonMin(brief),
-    targetTempC: brief.targetTempC,
-    targetBand: briefBand(brief),
-  } as EvaluateMixtureRequest;
-}
-
-async function evaluateCurve(brief: Brief, candidate: Pick<Candidate, 'composition'>, signal?: AbortSignal): Promise<Curve> {
-  const result = await api.post('/api/mixtures/evaluate', { body: curveRequest(brief, candidate), schema: evaluateMixtureApiResponseSchema, signal });
+async function fetchCurve(id: number, signal?: AbortSignal): Promise<Curve> {
+  const result = await api.get(`/api/candidates/${id}/curve`, { schema: candidateCurveSchema, signal });
   return result.curve;
 }
 
@@ -65,14 +46,14 @@ type WithCurve = Pick<Candidate, 'composition'> & { id: number; curve?: Curve };
 
 /**
  * The temperature curves of some candidates: the one a candidate carries, else the thermal model's
- * through POST /api/mixtures/evaluate (cached per candidate). Answers one query per candidate.
+ * replayed by the server (cached per candidate). Answers one query per candidate.
  */
 export function useCandidateCurves(items: readonly { candidate: WithCurve; brief: Brief | undefined }[]) {
   return useQueries({
     queries: items.map(({ candidate, brief }) => ({
       queryKey: ['candidates', 'detail', candidate.id, 'curve'] as const,
       queryFn: ({ signal }: { signal: AbortSignal }) =>
-        candidate.curve && candidate.curve.length ? Promise.resolve(candidate.curve) : evaluateCurve(brief!, candidate, signal),
+        candidate.curve && candidate.curve.length ? Promise.resolve(candidate.curve) : fetchCurve(candidate.id, signal),
       enabled: !!brief || !!candidate.curve?.length,
       staleTime: Number.POSITIVE_INFINITY,
     })),

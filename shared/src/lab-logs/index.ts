@@ -2,6 +2,6 @@
 export * from './parse-log';
 export * from './overlay';
 export * from './scenario';
-export * from './calibrations';
+export * from '../calibration/calibrations';
 export * from './calibrate';
 export * from './monte-carlo';

@@ -1,5 +1,6 @@
+import type { ModelCalibrations } from '../calibration/calibrations';
 import type { Brief } from '../schemas/briefs';
-import { holdBand, verificationHorizonMin, VERIFY_TOLERANCE_K, VERIFY_TOLERANCE_MIN } from '../optimiser/verify';
+import { briefMisses, holdBand, verificationHorizonMin } from '../evaluation/verify';
 import type { ChemistryPort } from '../thermal/chemistry-port';
 import type { ThermalComponent } from '../thermal/pack-model';
 import type { TimeProfileResult } from '../thermal/time-profile';
@@ -163,20 +164,15 @@ export function monteCarloBand(port: ChemistryPort, scenario: LabScenario, optio
 }
 
 /**
- * Does a simulated profile meet the brief? The same rules as the optimiser's verification
- * (optimiser/verify.ts): reach the target within reachWithinMin, hold the band for holdMin,
- * stay inside the surface limits, with the same tolerances.
+ * Does a simulated profile meet the brief? The verification's own rules and tolerances
+ * (evaluation/verify.ts, {@link briefMisses}): no miss.
  */
 export function meetsBrief(brief: Brief, profile: TimeProfileResult): boolean {
-  if (profile.timeToTargetMin === null || profile.timeToTargetMin > brief.reachWithinMin + VERIFY_TOLERANCE_MIN) return false;
-  if ((profile.minutesInBand ?? 0) < brief.holdMin - VERIFY_TOLERANCE_MIN) return false;
-  if (brief.minSurfaceTempC !== null && profile.minTempC < brief.minSurfaceTempC - VERIFY_TOLERANCE_K) return false;
-  if (brief.maxSurfaceTempC !== null && profile.maxTempC > brief.maxSurfaceTempC + VERIFY_TOLERANCE_K) return false;
-  return true;
+  return briefMisses(brief, profile).length === 0;
 }
 
-/** The scenario of a candidate under its brief: the verification's horizon, band and exchange. */
-export function briefScenario(brief: Brief, components: ThermalComponent[], uaMultiplier = 1): LabScenario {
+/** The scenario of a candidate under its brief: the verification's horizon, band and exchange, and the run's calibrations. */
+export function briefScenario(brief: Brief, components: ThermalComponent[], calibrations: ModelCalibrations | null = null): LabScenario {
   return {
     components,
     initialTempC: brief.initialTempC,
@@ -184,7 +180,7 @@ export function briefScenario(brief: Brief, components: ThermalComponent[], uaMu
     contact: brief.contact,
     packAreaM2: brief.packAreaM2,
     uaWPerK: brief.uaWPerK ?? null,
-    uaMultiplier,
+    calibrations,
     packHeatCapacityJPerK: brief.packaging.heatCapacityJPerK,
     horizonMin: verificationHorizonMin(brief),
     targetTempC: brief.targetTempC,

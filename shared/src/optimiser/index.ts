@@ -2,8 +2,8 @@
 export type { IngredientNeed, IngredientSet, OptimiserIngredient, OptimiserWarning } from './types';
 export { enumerateSets, isWaterIngredient } from './enumerate-sets';
 export type { ExcludedIngredient, SetEnumeration } from './enumerate-sets';
-export { resolveHeatExchange } from './heat-exchange';
-export type { HeatExchange } from './heat-exchange';
+export { resolveHeatExchange } from '../evaluation/heat-exchange';
+export type { HeatExchange } from '../evaluation/heat-exchange';
 export {
   GAS_MOLAR_VOLUME_L_PER_MOL,
   buildLinearModel,
@@ -31,8 +31,8 @@ export type { LpCounter, LpProblem, LpRow, LpSolution, LpStatus, SetSolution } f
 export { saturationEstimate, solveSetIterated } from './iterate-enthalpy';
 export type { EnthalpyIterationOptions, IteratedSet } from './iterate-enthalpy';
 export { diagnoseInfeasible } from './diagnose-infeasible';
-export { VERIFY_TOLERANCE_K, VERIFY_TOLERANCE_MIN, holdBand, verificationHorizonMin, verifyComposition } from './verify';
-export type { VerifyOptions } from './verify';
+export { VERIFY_TOLERANCE_K, VERIFY_TOLERANCE_MIN, holdBand, verificationHorizonMin, verifyComposition } from '../evaluation/verify';
+export type { VerifyOptions } from '../evaluation/verify';
 export { TIE_TOLERANCE, orderByObjective, paretoFlags, rankCandidates } from './rank';
 export type { RankItem } from './rank';
 export { sensitivityOf } from './sensitivity';

@@ -2,7 +2,7 @@ import type { Brief, ConcentrationCap, ConstraintKind } from '../schemas/briefs'
 import type { ChemistryPort } from '../thermal/chemistry-port';
 import { INERT_CP_J_PER_GK, REFERENCE_TEMP_C, WATER_CP_J_PER_GK, WATER_MOLAR_MASS_G_PER_MOL } from '../thermal/constants';
 import { PackModel } from '../thermal/pack-model';
-import { resolveHeatExchange } from './heat-exchange';
+import { resolveHeatExchange } from '../evaluation/heat-exchange';
 import type { IngredientSet, OptimiserIngredient, OptimiserWarning } from './types';
 
 /**

@@ -9,7 +9,6 @@ import {
   type OptimisationResult,
   type Verification,
 } from '../schemas/briefs';
-import { chemistryPort } from '../thermal/chemistry-adapter';
 import type { ChemistryPort } from '../thermal/chemistry-port';
 import { REFERENCE_TEMP_C } from '../thermal/constants';
 import { diagnoseInfeasible } from './diagnose-infeasible';
@@ -30,10 +29,12 @@ import { orderByObjective, paretoFlags, rankCandidates, type RankItem } from './
 import { sensitivityOf } from './sensitivity';
 import type { LpCounter } from './solve-set';
 import type { OptimiserIngredient, OptimiserWarning } from './types';
-import { verifyComposition } from './verify';
+import { verifyComposition } from '../evaluation/verify';
+import { lineOf } from '../evaluation/components';
+import { chemistryModelFor } from '../evaluation/chemistry-cache';
 import { hazardCapsFor } from '../hazards/optimiser-hazards';
 import { hazardsOfCandidate } from './candidate-hazards';
-import { applyIngredientCalibrations, enthalpyFactorsBySolute, scaledEnthalpyPort, type ModelCalibrations } from '../lab-logs/calibrations';
+import { applyIngredientCalibrations, contactUaMultiplier, enthalpyFactorsBySolute, scaledEnthalpyPort, type ModelCalibrations } from '../calibration/calibrations';
 
 export interface RunOptimisationInput {
   /** A brief (parsed, or as written: it is parsed with briefSchema, defaults applied). */
@@ -109,8 +110,9 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
   const brief: Brief = briefSchema.parse(input.brief);
   const calibrations = input.calibrations ?? null;
   if (calibrations) input = { ...input, ingredients: applyIngredientCalibrations(input.ingredients, calibrations) };
-  const port = scaledEnthalpyPort(options.port ?? portFor(input.chemistry), enthalpyFactorsBySolute(input.ingredients, calibrations));
-  const uaMultiplier = brief.uaWPerK === null || brief.uaWPerK === undefined ? (calibrations?.contacts?.[brief.contact]?.uaMultiplier ?? 1) : 1;
+  const basePort = options.port ?? chemistryModelFor(input.chemistry);
+  const port = scaledEnthalpyPort(basePort, enthalpyFactorsBySolute(input.ingredients, calibrations));
+  const uaMultiplier = contactUaMultiplier(calibrations, brief.contact, brief.uaWPerK !== null && brief.uaWPerK !== undefined);
   // Cap tokens among the excluded hazard classes (`precursor-an`, `cap:eye-dam-1`, …) become caps (hazards/optimiser-hazards.ts).
   const hazardCaps = hazardCapsFor(brief.excludedHazardClasses, input.ingredients);
   const ctx = thermalContext(brief, [...(options.extraCaps ?? []), ...hazardCaps], uaMultiplier);
@@ -197,9 +199,10 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
       cancelled = true;
       break;
     }
-    const composition = w.iterated.model.coefficients.map((c, i) => ({ ingredient: c.ingredient, massG: w.iterated.solution.massesG[i] ?? 0 }));
-    const v = verifyComposition(port, brief, composition, { ...(options.verifyRtol !== undefined ? { rtol: options.verifyRtol } : {}), uaMultiplier });
-    const { profile, ...verification } = v;
+    // The evaluation core applies the calibrations itself (over the uncalibrated port).
+    const lines = w.iterated.model.coefficients.map((c, i) => lineOf(c.ingredient, w.iterated.solution.massesG[i] ?? 0));
+    const v = verifyComposition(basePort, brief, lines, { ...(options.verifyRtol !== undefined ? { rtol: options.verifyRtol } : {}), calibrations });
+    const { profile, evaluation: _evaluation, ...verification } = v;
     if (profile) {
       addWarnings(profile.warnings, w.candidate.setNames.join(' + '));
       w.candidate.warnings = dedupeWarnings([...w.candidate.warnings, ...profile.warnings]);
@@ -260,22 +263,12 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
   };
 }
 
-const ports = new WeakMap<ChemistryLibrary, ChemistryPort>();
 
 /**
  * One chemistry port per library object, reused by later runs in the same process: the port
  * samples each solute's curves on first use (tens to hundreds of ms per solute), and a memo
  * keyed by the (read-only) library changes no result.
  */
-function portFor(lib: ChemistryLibrary): ChemistryPort {
-  let p = ports.get(lib);
-  if (!p) {
-    p = chemistryPort(lib);
-    ports.set(lib, p);
-  }
-  return p;
-}
-
 function unitOfObjective(ctx: ThermalContext): string {
   if (ctx.objective === 'least-cost') return 'currency';
   if (ctx.objective === 'least-mass') return 'g';

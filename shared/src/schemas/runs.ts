@@ -80,3 +80,14 @@ export const runListResponseSchema = z.object({ runs: z.array(runSummarySchema) 
 export const createRunResponseSchema = z.object({ runId: z.number() });
 export const candidateResponseSchema = z.object({ candidate: candidateRecordSchema, currency: z.string(), brief: briefSpecSchema });
 export const briefIdParamsSchema = z.object({ id: z.coerce.number().int('must be a whole number').positive('must be a positive id') });
+
+/** GET /api/candidates/:id/curve: the candidate's curve under its brief, as its run's data and calibrations give it. */
+export const candidateCurveSchema = z.object({
+  curve: z.array(z.object({ tMin: z.number(), tempC: z.number() })),
+  band: z.object({ minC: z.number(), maxC: z.number() }),
+  timeToTargetMin: z.number().nullable(),
+  minutesInBand: z.number().nullable(),
+  /** Why there is no curve, or null. */
+  error: z.string().nullable(),
+});
+export type CandidateCurve = z.infer<typeof candidateCurveSchema>;

@@ -29,7 +29,6 @@ export { solveEndState, END_STATE_MIN_TEMP_C, END_STATE_MAX_TEMP_C } from './end
 export type { EndStateInput, EndStateResult, SoluteEndState, DissolutionLimit } from './end-state';
 export { simulateTimeProfile, TIME_PROFILE_DEFAULTS } from './time-profile';
 export type { TimeProfileInput, TimeProfileResult, CurvePoint, TargetBand, SoluteProgress } from './time-profile';
-export { evaluateMixture } from './evaluate-mixture';
 export { integrateDormandPrince } from './rk45';
 export type { OdeOptions, OdeSolution, OdeRhs } from './rk45';
 export { brentRoot } from './root';

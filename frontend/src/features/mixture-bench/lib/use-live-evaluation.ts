@@ -2,7 +2,9 @@ import { useEffect, useMemo, useState } from 'react';
 import type { ChemistryLibrary } from '@shared/chemistry';
 import type { Ingredient } from '@shared/schemas/library';
 import type { EvaluateMixtureRequest, EvaluateMixtureResponse } from '@shared/schemas/mixtures';
-import { ThermalModelError, chemistryPort, evaluateMixture } from '@shared/thermal';
+import { evaluateMixture } from '@shared/evaluation/evaluate-mixture';
+import { chemistryModelFor } from '@shared/evaluation/chemistry-cache';
+import { ThermalModelError } from '@shared/thermal';
 import { resolveMixture } from './resolve-mixture';
 
 type Outcome =
@@ -25,8 +27,8 @@ export function useLiveEvaluation(
   request: EvaluateMixtureRequest | null,
   delayMs = 250,
 ): LiveEvaluation {
-  // Building the port samples the chemistry curves once; keep it while the library is the same.
-  const port = useMemo(() => (lib ? chemistryPort(lib) : null), [lib]);
+  // The chemistry model of the library from the one cache per library revision.
+  const port = useMemo(() => (lib ? chemistryModelFor(lib) : null), [lib]);
   const [latest, setLatest] = useState<{ key: string; outcome: Outcome } | null>(null);
   const key = request ? JSON.stringify(request) : null;
 

@@ -1,10 +1,8 @@
+import type { ChemistryLibrary } from '../chemistry/types';
 import { resolvedMixtureSchema, type EvaluateMixtureResponse, type ResolvedMixture } from '../schemas/mixtures';
-import type { ChemistryPort } from './chemistry-port';
-import { contactUA } from './contact';
-import { solveModelEndState } from './end-state';
-import { ThermalModelError } from './errors';
-import { PackModel } from './pack-model';
-import { simulateModel } from './time-profile';
+import type { ChemistryPort } from '../thermal/chemistry-port';
+import { ThermalModelError } from '../thermal/errors';
+import { evaluate } from './evaluate';
 
 /**
  * The computation behind POST /api/mixtures/evaluate: the time profile of a resolved mixture
@@ -12,13 +10,15 @@ import { simulateModel } from './time-profile';
  * state. With `uaWPerK: 0` and `packHeatCapacityJPerK: 0` the profile is adiabatic and, once
  * the processes have run, ends at `adiabaticEndTempC`.
  *
+ * Runs through the evaluation core ({@link evaluate}).
+ *
  * Throws ThermalModelError (with `field`) when the input breaks the schema or the model.
  *
  * @example evaluateMixture(port, { components: [{ key: 'water', massG: 100, process: { kind: 'inert', role: 'water' } },
  *   { key: 'NH4NO3', massG: 40, process: { kind: 'dissolution', solidKey: 'NH4NO3(cr)' } }],
  *   initialTempC: 25, ambientC: 25, uaWPerK: 0, packHeatCapacityJPerK: 0, holdMin: 20 }).endTempC // ≈ 2.6
  */
-export function evaluateMixture(port: ChemistryPort, input: ResolvedMixture): EvaluateMixtureResponse {
+export function evaluateMixture(chemistry: ChemistryPort | ChemistryLibrary, input: ResolvedMixture): EvaluateMixtureResponse {
   const parsed = resolvedMixtureSchema.safeParse(input);
   if (!parsed.success) {
     const issue = parsed.error.issues[0];
@@ -27,31 +27,25 @@ export function evaluateMixture(port: ChemistryPort, input: ResolvedMixture): Ev
     });
   }
   const m = parsed.data;
-  const massG = m.components.reduce((a, c) => a + c.massG, 0);
-  let uaWPerK: number;
-  let envTempC = m.ambientC;
-  let areaM2: number | null = m.packAreaM2 ?? null;
-  if (m.contact) {
-    const c = contactUA(m.contact, m.ambientC, massG);
-    uaWPerK = c.uaWPerK;
-    envTempC = c.envTempC;
-    areaM2 = c.areaM2;
-  } else uaWPerK = m.uaWPerK ?? 0;
-
-  const model = new PackModel(
-    port,
-    m.components.map((c) => ({ ...(c.key ? { key: c.key } : {}), ...(c.formula ? { formula: c.formula } : {}), massG: c.massG, process: c.process })),
-    { packHeatCapacityJPerK: m.packHeatCapacityJPerK, ...(areaM2 !== null ? { packAreaM2: areaM2 } : {}) },
-  );
-  const profile = simulateModel(model, {
-    initialTempC: m.initialTempC,
-    envTempC,
-    uaWPerK,
-    holdMin: m.holdMin,
-    ...(m.targetTempC !== undefined ? { targetTempC: m.targetTempC } : {}),
-    ...(m.targetBand ? { targetBand: m.targetBand } : {}),
+  const ev = evaluate({
+    lines: m.components.map((c, k) => ({ id: c.key ?? c.formula ?? `component ${k + 1}`, name: c.key ?? c.formula ?? `component ${k + 1}`, ...(c.formula ? { formula: c.formula } : {}), massG: c.massG, process: c.process })),
+    conditions: {
+      initialTempC: m.initialTempC,
+      ambientC: m.ambientC,
+      exchange: m.contact ? { contact: m.contact } : { uaWPerK: m.uaWPerK ?? 0 },
+      packHeatCapacityJPerK: m.packHeatCapacityJPerK,
+      ...(!m.contact && m.packAreaM2 !== undefined ? { packAreaM2: m.packAreaM2 } : {}),
+      horizonMin: m.holdMin,
+      ...(m.targetTempC !== undefined ? { targetTempC: m.targetTempC } : {}),
+      ...(m.targetBand ? { targetBand: m.targetBand } : {}),
+    },
+    chemistry,
+    options: { endState: true },
   });
-  const end = solveModelEndState(model, m.initialTempC, 0);
+  const { model, profile } = ev;
+  const massG = ev.massG;
+  const { uaWPerK, envTempC, areaM2 } = ev.exchange;
+  const end = ev.endState!;
 
   let dissolvingMass = 0;
   let dissolvedMass = 0;

@@ -13,6 +13,28 @@ export interface ModelCalibrations {
   ingredients?: Record<string, { rateConstantPerMin?: number; enthalpyFactor?: number; calibrationId?: number }>;
 }
 
+/** The model's adjustable parameters: multipliers on the nominal figures (1 = as modelled); what a lab-log fit and the Monte Carlo band vary. */
+export interface ModelParameters {
+  uaMultiplier: number;
+  /** On every dissolving solute's enthalpy of solution. */
+  enthalpyFactor: number;
+  /** On every process's rate constant. */
+  rateMultiplier: number;
+  /** On the pack's total heat capacity. */
+  heatCapacityFactor: number;
+}
+
+export const NOMINAL_PARAMETERS: ModelParameters = { uaMultiplier: 1, enthalpyFactor: 1, rateMultiplier: 1, heatCapacityFactor: 1 };
+
+/**
+ * The UA multiplier a calibration gives a brief's contact case; 1 when the exchange is a UA given
+ * directly (a measured UA is not re-calibrated) or the case has no calibration.
+ */
+export function contactUaMultiplier(calibrations: ModelCalibrations | null | undefined, contact: BriefContactCase, uaGivenDirectly: boolean): number {
+  if (uaGivenDirectly) return 1;
+  return calibrations?.contacts?.[contact]?.uaMultiplier ?? 1;
+}
+
 /** The species key of the solute whose enthalpy of solution an ingredient's dissolution uses. */
 export function soluteKeyOf(process: IngredientProcessInput | null | undefined): string | null {
   if (!process || process.kind !== 'dissolution') return null;

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { evaluateMixtureRequestSchema, evaluateMixtureResponseSchema, type ResolvedMixture } from '../schemas/mixtures';
-import { defaultChemistryPort } from './chemistry-adapter';
-import { solveEndState } from './end-state';
+import { defaultChemistryPort } from '../thermal/chemistry-adapter';
+import { solveEndState } from '../thermal/end-state';
 import { evaluateMixture } from './evaluate-mixture';
-import { ThermalModelError } from './errors';
+import { ThermalModelError } from '../thermal/errors';
 
 const port = defaultChemistryPort();
 const components: ResolvedMixture['components'] = [
