@@ -7,7 +7,7 @@ import {
   type ModelCalibrations,
   type ModelParameters,
 } from '../calibration/calibrations';
-import type { ContactCase as BriefContactCase } from '../schemas/briefs';
+import type { ContactCase as BriefContactCase, Load, LoadInput } from '../schemas/briefs';
 import type { ChemistryPort } from '../thermal/chemistry-port';
 import { contactUA, type ContactCase as ThermalContact } from '../thermal/contact';
 import { solveModelEndState, type EndStateResult } from '../thermal/end-state';
@@ -16,6 +16,7 @@ import { ingredientProcessSchema, type IngredientProcessInput } from '../thermal
 import { simulateModel, type CurvePoint, type TargetBand, type TimeProfileResult } from '../thermal/time-profile';
 import { portOf } from './chemistry-cache';
 import { componentsOf, processOfLine, type EvaluationLine } from './components';
+import { lumpedLoad } from './load';
 
 /**
  * How the pack exchanges heat: a UA given directly (with the ambient temperature), or a contact
@@ -40,6 +41,8 @@ export interface EvaluationConditions {
   horizonMin: number;
   targetTempC?: number;
   targetBand?: TargetBand;
+  /** What the pack heats or cools (load.ts); the target and band then apply to it. */
+  load?: Load | LoadInput | null;
 }
 
 export interface EvaluationInput {
@@ -62,13 +65,17 @@ export interface EvaluationInput {
 
 /** The temperatures a brief is judged by. */
 export interface EvaluationFigures {
+  /** The pack's curve. */
   curve: CurvePoint[];
   endTempC: number;
   /** Coldest and warmest the pack's surface gets, °C (surface limits and hazard notes). */
   minTempC: number;
   maxTempC: number;
+  /** When the target is reached and how long the band is held: the load's when there is one, else the pack's. */
   timeToTargetMin: number | null;
   minutesInBand: number | null;
+  /** The load's temperatures, when there is a load. */
+  load: { curve: CurvePoint[]; endTempC: number; minTempC: number; maxTempC: number; heatFromPackJ: number } | null;
 }
 
 export interface Evaluation {
@@ -114,7 +121,9 @@ export function exchangeOf(
  *    each solute's calibrated factor × the enthalpy factor;
  * 3. the pack model (thermal/pack-model.ts) with the packaging's heat capacity × the heat-capacity factor;
  * 4. the heat exchange ({@link exchangeOf}) × the UA multiplier;
- * 5. the lumped-capacitance time profile (thermal/time-profile.ts) over the horizon, and on request
+ * 5. the load, when there is one, as a second lumped node (load.ts) whose temperature the target
+ *    and band are judged on;
+ * 6. the lumped-capacitance time profile (thermal/time-profile.ts) over the horizon, and on request
  *    the adiabatic end state (thermal/end-state.ts).
  * Throws ThermalModelError when the model cannot run the input.
  *
@@ -161,14 +170,17 @@ export function evaluate(input: EvaluationInput): Evaluation {
     ...(c.targetBand ? { targetBand: c.targetBand } : {}),
     ...(o.curveStepMin !== undefined ? { curveStepMin: o.curveStepMin } : {}),
     ...(o.rtol !== undefined ? { rtol: o.rtol } : {}),
+    ...(c.load ? { load: lumpedLoad(c.load, c.ambientC) } : {}),
   });
+  const l = profile.load;
   const figures: EvaluationFigures = {
     curve: profile.curve,
     endTempC: profile.endTempC,
     minTempC: profile.minTempC,
     maxTempC: profile.maxTempC,
-    timeToTargetMin: profile.timeToTargetMin,
-    minutesInBand: profile.minutesInBand,
+    timeToTargetMin: l ? l.timeToTargetMin : profile.timeToTargetMin,
+    minutesInBand: l ? l.minutesInBand : profile.minutesInBand,
+    load: l ? { curve: l.curve, endTempC: l.endTempC, minTempC: l.minTempC, maxTempC: l.maxTempC, heatFromPackJ: l.heatFromPackJ } : null,
   };
   return {
     profile,

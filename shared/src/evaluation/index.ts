@@ -11,3 +11,4 @@ export * from './verify';
 export * from './hazards';
 export { evaluateMixture } from './evaluate-mixture';
 export * from './resolve-mixture';
+export * from './load';

@@ -57,29 +57,39 @@ export function conditionsFromBrief(brief: Brief, horizonMin = verificationHoriz
     horizonMin,
     targetTempC: brief.targetTempC,
     targetBand: holdBand(brief),
+    // Stored briefs from before the load was part of a brief have none.
+    ...(brief.load ? { load: brief.load } : {}),
   };
 }
 
 /**
- * How a run misses its brief, one reason per miss with the figures (empty: it meets the brief):
+ * How a run misses its brief, one reason per miss with the figures (empty: it meets the brief);
+ * with a load, the target and hold are judged on the load's temperature:
  * - it reaches the target (cold: ≤ targetTempC, warm: ≥) within reachWithinMin;
  * - it spends at least holdMin minutes in the {@link holdBand};
  * - it stays within the surface limits (minSurfaceTempC ≤ T ≤ maxSurfaceTempC).
  * Differences under {@link VERIFY_TOLERANCE_K} and {@link VERIFY_TOLERANCE_MIN} are not misses.
  */
-export function briefMisses(brief: Brief, f: Omit<EvaluationFigures, 'curve'>, horizonMin = verificationHorizonMin(brief)): string[] {
+export function briefMisses(
+  brief: Brief,
+  f: Pick<EvaluationFigures, 'minTempC' | 'maxTempC' | 'timeToTargetMin' | 'minutesInBand'> & { load?: { minTempC: number; maxTempC: number } | null },
+  horizonMin = verificationHorizonMin(brief),
+): string[] {
   const band = holdBand(brief);
   const reasons: string[] = [];
   const cold = brief.packType === 'cold';
   const word = cold ? 'down to' : 'up to';
+  // With a load, the target and the hold are the load's (the surface limits stay the pack's).
+  const who = f.load ? 'the load ' : '';
+  const served = f.load ?? f;
   if (f.timeToTargetMin === null) {
-    reasons.push(`never gets ${word} ${brief.targetTempC} °C in ${fmt(horizonMin)} min (${cold ? 'coldest' : 'warmest'} ${fmt(cold ? f.minTempC : f.maxTempC)} °C)`);
+    reasons.push(`${who}never gets ${word} ${brief.targetTempC} °C in ${fmt(horizonMin)} min (${cold ? 'coldest' : 'warmest'} ${fmt(cold ? served.minTempC : served.maxTempC)} °C)`);
   } else if (f.timeToTargetMin > brief.reachWithinMin + VERIFY_TOLERANCE_MIN) {
-    reasons.push(`gets ${word} ${brief.targetTempC} °C after ${fmt(f.timeToTargetMin)} min, later than the ${fmt(brief.reachWithinMin)} min allowed`);
+    reasons.push(`${who}gets ${word} ${brief.targetTempC} °C after ${fmt(f.timeToTargetMin)} min, later than the ${fmt(brief.reachWithinMin)} min allowed`);
   }
   const inBand = f.minutesInBand ?? 0;
   if (inBand < brief.holdMin - VERIFY_TOLERANCE_MIN) {
-    reasons.push(`holds ${describeBand(band)} for ${fmt(inBand)} min, short of the ${fmt(brief.holdMin)} min asked`);
+    reasons.push(`${who}holds ${describeBand(band)} for ${fmt(inBand)} min, short of the ${fmt(brief.holdMin)} min asked`);
   }
   if (brief.minSurfaceTempC !== null && f.minTempC < brief.minSurfaceTempC - VERIFY_TOLERANCE_K) {
     reasons.push(`gets as cold as ${fmt(f.minTempC)} °C, below the ${brief.minSurfaceTempC} °C surface limit`);

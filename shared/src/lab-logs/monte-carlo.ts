@@ -168,7 +168,8 @@ export function monteCarloBand(port: ChemistryPort, scenario: LabScenario, optio
  * (evaluation/verify.ts, {@link briefMisses}): no miss.
  */
 export function meetsBrief(brief: Brief, profile: TimeProfileResult): boolean {
-  return briefMisses(brief, profile).length === 0;
+  const l = profile.load;
+  return briefMisses(brief, l ? { ...profile, timeToTargetMin: l.timeToTargetMin, minutesInBand: l.minutesInBand, load: l } : profile).length === 0;
 }
 
 /** The scenario of a candidate under its brief: the verification's horizon, band and exchange, and the run's calibrations. */
@@ -181,6 +182,7 @@ export function briefScenario(brief: Brief, components: ThermalComponent[], cali
     packAreaM2: brief.packAreaM2,
     uaWPerK: brief.uaWPerK ?? null,
     calibrations,
+    load: brief.load ?? null,
     packHeatCapacityJPerK: brief.packaging.heatCapacityJPerK,
     horizonMin: verificationHorizonMin(brief),
     targetTempC: brief.targetTempC,

@@ -1,7 +1,7 @@
 import { NOMINAL_PARAMETERS, type ModelCalibrations, type ModelParameters } from '../calibration/calibrations';
 import { evaluate, rateConstantOf, type EvaluationConditions } from '../evaluation/evaluate';
 import { resolveHeatExchange, thermalContactCase } from '../evaluation/heat-exchange';
-import type { ContactCase as BriefContactCase } from '../schemas/briefs';
+import type { ContactCase as BriefContactCase, Load } from '../schemas/briefs';
 import type { ChemistryPort } from '../thermal/chemistry-port';
 import type { ThermalComponent } from '../thermal/pack-model';
 import type { TargetBand, TimeProfileResult } from '../thermal/time-profile';
@@ -28,6 +28,8 @@ export interface LabScenario {
    * A recorded test's own scenario carries none: it is what a calibration is fitted to.
    */
   calibrations?: ModelCalibrations | null;
+  /** What the pack heats or cools (a brief's load); the target and band then apply to it. */
+  load?: Load | null;
   horizonMin: number;
   targetTempC?: number;
   targetBand?: TargetBand;
@@ -63,6 +65,7 @@ export function scenarioConditions(s: LabScenario): EvaluationConditions {
     horizonMin: s.horizonMin,
     ...(s.targetTempC !== undefined ? { targetTempC: s.targetTempC } : {}),
     ...(s.targetBand ? { targetBand: s.targetBand } : {}),
+    ...(s.load ? { load: s.load } : {}),
   };
 }
 

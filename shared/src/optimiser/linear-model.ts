@@ -3,6 +3,7 @@ import type { ChemistryPort } from '../thermal/chemistry-port';
 import { INERT_CP_J_PER_GK, REFERENCE_TEMP_C, WATER_CP_J_PER_GK, WATER_MOLAR_MASS_G_PER_MOL } from '../thermal/constants';
 import { PackModel } from '../thermal/pack-model';
 import { resolveHeatExchange } from '../evaluation/heat-exchange';
+import { lumpedLoad } from '../evaluation/load';
 import type { IngredientSet, OptimiserIngredient, OptimiserWarning } from './types';
 
 /**
@@ -59,6 +60,8 @@ export interface ThermalContext {
   reachWithinS: number;
   packAreaM2: number;
   packaging: { massG: number; heatCapacityJPerK: number; cost: number };
+  /** The brief's load as a heat budget: its heat capacity, start and leak to its surroundings (evaluation/load.ts); null without one. */
+  load: { heatCapacityJPerK: number; initialTempC: number; uaToEnvWPerK: number; envTempC: number } | null;
   maxMassG: number;
   maxUnitCost: number | null;
   maxGasL: number;
@@ -91,6 +94,7 @@ export function thermalContext(brief: Brief, extraCaps: readonly ConcentrationCa
     reachWithinS: brief.reachWithinMin * 60,
     packAreaM2: brief.packAreaM2,
     packaging: { massG: brief.packaging.massG, heatCapacityJPerK: brief.packaging.heatCapacityJPerK, cost: Number(brief.packaging.cost) },
+    load: brief.load ? lumpedLoad(brief.load, brief.ambientC) : null,
     maxMassG: brief.maxMassG,
     maxUnitCost: brief.maxUnitCost === null ? null : Number(brief.maxUnitCost),
     maxGasL: brief.maxGasL,
@@ -398,7 +402,9 @@ export function buildLinearModel(set: IngredientSet, coefficients: IngredientCoe
   // Heat also leaks in while the pack is still on its way to the target: over the reach window
   // the pack is, on average, about halfway between its start and the target.
   const reachExchangeJ = ctx.uaWPerK * s * (ctx.envTempC - (ctx.initialTempC + tStar) / 2) * ctx.reachWithinS;
-  const heatBudgetJ = exchangeJPerS * ctx.holdS + Math.max(0, reachExchangeJ) + s * ctx.packaging.heatCapacityJPerK * (ctx.initialTempC - tStar) + s * filmHeatJ;
+  // A load is brought from its start to the target like the packaging, and leaks to its own surroundings over the hold.
+  const loadJ = ctx.load ? s * ctx.load.heatCapacityJPerK * (ctx.load.initialTempC - tStar) + ctx.load.uaToEnvWPerK * s * (ctx.load.envTempC - tStar) * ctx.holdS : 0;
+  const heatBudgetJ = exchangeJPerS * ctx.holdS + Math.max(0, reachExchangeJ) + s * ctx.packaging.heatCapacityJPerK * (ctx.initialTempC - tStar) + s * filmHeatJ + loadJ;
   rows.push({
     id: 'heat-budget',
     kind: 'heat-budget',

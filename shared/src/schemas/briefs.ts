@@ -83,6 +83,36 @@ export const packagingSchema = z.object({
 });
 export type Packaging = z.infer<typeof packagingSchema>;
 
+/** What a pack heats or cools. */
+export const LOAD_KINDS = ['food-drink', 'limb-through-fabric', 'cold-chain-box'] as const;
+export type LoadKind = (typeof LOAD_KINDS)[number];
+
+/**
+ * The thing the pack serves (a meal or drink, a limb through fabric, a cold-chain box's
+ * contents) as a lumped heat capacity with its own start temperature, coupled to the pack by a
+ * conductance given directly (`uaToPackWPerK`) or from a contact area (`contactAreaM2` × the
+ * kind's contact conductance, evaluation/load.ts), and to the surroundings by `uaToEnvWPerK`.
+ * With a load the brief's target and hold apply to the load's temperature; the surface limits
+ * stay on the pack.
+ */
+export const loadSchema = z
+  .object({
+    kind: z.enum(LOAD_KINDS, { error: `must be one of ${LOAD_KINDS.join(', ')}` }),
+    massG: z.number({ error: 'must be a number of grams' }).positive('must be greater than 0').max(100000, 'must be at most 100 kg'),
+    cpJPerGK: z.number({ error: 'must be a number in J/(g·K)' }).positive('must be greater than 0').max(10, 'must be at most 10 J/(g·K)'),
+    /** Start temperature of the load, °C; default the brief's ambient. */
+    initialTempC: z.number({ error: 'must be a number of °C' }).min(-60, 'must be at least −60 °C').max(200, 'must be at most 200 °C').nullable().default(null),
+    uaToPackWPerK: z.number({ error: 'must be a number in W/K' }).min(0, 'must be 0 or more').max(1000, 'must be at most 1000 W/K').nullable().default(null),
+    contactAreaM2: z.number({ error: 'must be a number of m²' }).positive('must be greater than 0').max(10, 'must be at most 10 m²').nullable().default(null),
+    uaToEnvWPerK: z.number({ error: 'must be a number in W/K' }).min(0, 'must be 0 or more').max(1000, 'must be at most 1000 W/K').default(0),
+  })
+  .refine((l) => (l.uaToPackWPerK === null) !== (l.contactAreaM2 === null), {
+    message: 'give either uaToPackWPerK or contactAreaM2 (exactly one)',
+    path: ['uaToPackWPerK'],
+  });
+export type Load = z.infer<typeof loadSchema>;
+export type LoadInput = z.input<typeof loadSchema>;
+
 /** Defaults of a brief, by pack type: a sideline cold compress and a warm compress. */
 export const BRIEF_DEFAULTS = {
   cold: {
@@ -164,6 +194,8 @@ const briefFields = {
   /** Most active ingredients per mixture, 1–3. */
   maxActives: z.number({ error: 'must be 1, 2 or 3' }).int('must be 1, 2 or 3').min(1, 'must be 1, 2 or 3').max(3, 'must be 1, 2 or 3').default(BRIEF_DEFAULTS.maxActives),
   packaging: packagingSchema.default({ massG: 12, heatCapacityJPerK: 24, cost: '0.08' }),
+  /** What the pack heats or cools; null (the default): the pack itself is judged. */
+  load: loadSchema.nullable().default(null),
   notes: z.string({ error: 'must be text' }).max(4000, 'must be at most 4000 characters').default(''),
 };
 

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { contactSchema } from '../thermal/contact';
 import { ingredientProcessSchema } from '../thermal/process';
+import { loadSchema } from './briefs';
 import { idSchema } from './common';
 
 /**
@@ -26,6 +27,8 @@ const conditions = {
   holdMin: z.number().positive('holdMin must be greater than 0').max(10080, 'holdMin must be at most one week'),
   targetTempC: tempC('targetTempC').optional(),
   targetBand: targetBandSchema.optional(),
+  /** What the pack heats or cools (briefs.ts); the target and band then apply to it. */
+  load: loadSchema.optional(),
 };
 
 const oneExchange = <T extends { contact?: unknown; uaWPerK?: unknown }>(v: T) => (v.contact === undefined) !== (v.uaWPerK === undefined);
@@ -100,5 +103,16 @@ export const evaluateMixtureResponseSchema = z.object({
   areaM2: z.number().nullable(),
   energy: energyBreakdownSchema,
   warnings: z.array(warningSchema),
+  /** With a load: its curve and temperatures (timeToTargetMin and minutesInBand are then the load's). */
+  load: z
+    .object({
+      curve: z.array(z.object({ tMin: z.number(), tempC: z.number() })),
+      endTempC: z.number(),
+      minTempC: z.number(),
+      maxTempC: z.number(),
+      heatFromPackJ: z.number(),
+    })
+    .nullable()
+    .optional(),
 });
 export type EvaluateMixtureResponse = z.infer<typeof evaluateMixtureResponseSchema>;

@@ -30,6 +30,36 @@ export interface TimeProfileInput {
   curveStepMin?: number;
   /** Relative tolerance of the integrator (default 1e-6). */
   rtol?: number;
+  /** The thing the pack heats or cools, as a second lumped node; the target and band then apply to it. */
+  load?: LumpedLoad;
+}
+
+/**
+ * A load as a second lumped node (a meal, a limb through fabric, a box's contents):
+ *   C_load·dT_load/dt = UA_pl·(T_pack − T_load) − UA_le·(T_load − T_env,load)
+ * and the pack node gets −UA_pl·(T_pack − T_load).
+ */
+export interface LumpedLoad {
+  heatCapacityJPerK: number;
+  initialTempC: number;
+  /** Conductance pack ↔ load, W/K. */
+  uaToPackWPerK: number;
+  /** Conductance load ↔ its surroundings, W/K. */
+  uaToEnvWPerK: number;
+  /** Temperature the load exchanges with, °C (default the pack's envTempC). */
+  envTempC?: number;
+}
+
+/** The load's side of a profile. */
+export interface LoadProgress {
+  curve: CurvePoint[];
+  endTempC: number;
+  minTempC: number;
+  maxTempC: number;
+  timeToTargetMin: number | null;
+  minutesInBand: number | null;
+  /** Heat the pack gave the load over the profile, J (negative: took from it). */
+  heatFromPackJ: number;
 }
 
 export interface CurvePoint {
@@ -64,6 +94,8 @@ export interface TimeProfileResult {
   stats: { steps: number; rhsEvaluations: number; rejectedSteps: number };
   /** Extents at the end (internal layout of PackModel). */
   extents: number[];
+  /** With a load: its temperatures (the target and band are judged on them). */
+  load?: LoadProgress;
 }
 
 /**
@@ -80,7 +112,7 @@ export const TIME_PROFILE_DEFAULTS = {
 /**
  * Lumped-capacitance time profile of a pack:
  *
- *   C(x)·dT/dt = −Σ_i (∂H/∂x_i)·dx_i/dt − UA·(T − T_env)
+ *   C(x)·dT/dt = −Σ_i (∂H/∂x_i)·dx_i/dt − UA·(T − T_env) [− UA_pl·(T − T_load)]
  *
  * where H(T, x) is the pack's enthalpy (PackModel), ∂H/∂x_i·dx_i/dt the heat absorbed by
  * process i (so −… is its heat release rate q̇_i, including the Kirchhoff term of the changing
@@ -89,6 +121,9 @@ export const TIME_PROFILE_DEFAULTS = {
  * crystal growth driven by undercooling — a plateau at the melting point —, O2 uptake limited
  * by the film, ice towards the water–ice equilibrium). Integrated by Dormand–Prince 5(4)
  * ({@link integrateDormandPrince}); ∂H/∂x_i by central differences of H.
+ *
+ * With a load ({@link LumpedLoad}), a second node C_load·dT_load/dt = UA_pl·(T − T_load) −
+ * UA_le·(T_load − T_env); the target and band are then also judged on T_load (`load`).
  *
  * Example: 40 g NH4NO3 + 100 g water from 25 °C, UA = 0 → T falls within a few minutes to the
  * end-state temperature (about 2.6 °C) and stays there.
@@ -143,13 +178,15 @@ export function simulateModel(model: PackModel, input: Omit<TimeProfileInput, 'c
       absorbed += dHdx(model, T, x, i, scales[i]!, xb) * r;
     }
     const loss = ua * (T - tEnv);
-    dy[0] = -(absorbed + loss) / Math.max(c, 1e-9);
+    const toLoad = loadRhs(load, T, tEnv, y, n, dy);
+    dy[0] = -(absorbed + loss + toLoad) / Math.max(c, 1e-9);
     for (let i = 0; i < n; i++) dy[i + 1] = xdot[i]!;
     dy[n + 1] = loss;
   };
 
-  const y0 = [input.initialTempC, ...model.initialExtents(), 0];
-  const atol = [TIME_PROFILE_DEFAULTS.atolTempK, ...scales.map((s) => s * 1e-9), 1e-3];
+  const load = input.load;
+  const y0 = [input.initialTempC, ...model.initialExtents(), 0, ...(load ? [load.initialTempC, 0] : [])];
+  const atol = [TIME_PROFILE_DEFAULTS.atolTempK, ...scales.map((s) => s * 1e-9), 1e-3, ...(load ? [TIME_PROFILE_DEFAULTS.atolTempK, 1e-3] : [])];
   const tEndS = input.holdMin * 60;
   const sol = integrateDormandPrince(rhs, 0, tEndS, y0, {
     rtol: input.rtol ?? TIME_PROFILE_DEFAULTS.rtol,
@@ -168,10 +205,13 @@ export function simulateModel(model: PackModel, input: Omit<TimeProfileInput, 'c
   const endT = last[0]!;
   const xEnd = last.slice(1, n + 1);
   const lostJ = last[n + 1]!;
+  const toLoadJ = load ? last[n + 3]! : 0;
   const x0 = model.initialExtents();
-  const energy = energyBreakdown(model, { tempC: input.initialTempC, x: x0 }, { tempC: endT, x: xEnd }, lostJ);
+  // Heat given to the load leaves the pack as surely as heat lost to the surroundings.
+  const energy = energyBreakdown(model, { tempC: input.initialTempC, x: x0 }, { tempC: endT, x: xEnd }, lostJ + toLoadJ);
 
   const stats = analyseCurve(sol, input);
+  const loadStats = load ? analyseCurve(sol, input, n + 2, load.initialTempC) : null;
   const ice = xEnd[model.iceIndex]!;
   const solutes: SoluteProgress[] = model.solutes.map((s, j) => {
     const fraction = s.availableMol > 0 ? Math.min(1, Math.max(0, xEnd[j]! / s.availableMol)) : 1;
@@ -191,7 +231,35 @@ export function simulateModel(model: PackModel, input: Omit<TimeProfileInput, 'c
     warnings: model.warnings.list(),
     stats: { steps: sol.t.length - 1, rhsEvaluations: sol.rhsEvaluations, rejectedSteps: sol.rejectedSteps },
     extents: xEnd,
+    ...(loadStats
+      ? {
+          load: {
+            curve: loadStats.curve,
+            endTempC: last[n + 2]!,
+            minTempC: loadStats.minC,
+            maxTempC: loadStats.maxC,
+            timeToTargetMin: loadStats.timeToTargetMin,
+            minutesInBand: loadStats.minutesInBand,
+            heatFromPackJ: toLoadJ,
+          },
+        }
+      : {}),
   };
+}
+
+/**
+ * The load node's terms of the right-hand side (y = [T, x…, lost, T_load, heat to load]):
+ * writes dT_load/dt and the heat-to-load rate, returns q_pl = UA_pl·(T − T_load), W, for the
+ * pack node. 0 without a load.
+ */
+function loadRhs(load: LumpedLoad | undefined, T: number, tEnv: number, y: readonly number[], n: number, dy: number[]): number {
+  if (!load) return 0;
+  const tLoad = y[n + 2]!;
+  const q = load.uaToPackWPerK * (T - tLoad);
+  const out = load.uaToEnvWPerK * (tLoad - (load.envTempC ?? tEnv));
+  dy[n + 2] = (q - out) / Math.max(load.heatCapacityJPerK, 1e-9);
+  dy[n + 3] = q;
+  return q;
 }
 
 /** A size for each extent (its largest possible value), for tolerances and difference steps. */
@@ -232,6 +300,8 @@ const SUBSTEPS = 8;
 function analyseCurve(
   sol: OdeSolution,
   input: Omit<TimeProfileInput, 'components'>,
+  index = 0,
+  t0 = input.initialTempC,
 ): { curve: CurvePoint[]; minC: number; maxC: number; timeToTargetMin: number | null; minutesInBand: number | null } {
   const tEnd = sol.t.at(-1)!;
   const stepMin = input.curveStepMin ?? Math.max(0.05, input.holdMin / 80);
@@ -239,17 +309,16 @@ function analyseCurve(
   let k = 0;
   const tempAt = (tS: number): number => {
     while (k < sol.t.length - 2 && sol.t[k + 1]! < tS) k++;
-    if (sol.t.length === 1) return sol.y[0]![0]!;
-    return hermiteAt(sol, k, 0, Math.min(Math.max(tS, sol.t[k]!), sol.t[k + 1]!));
+    if (sol.t.length === 1) return sol.y[0]![index]!;
+    return hermiteAt(sol, k, index, Math.min(Math.max(tS, sol.t[k]!), sol.t[k + 1]!));
   };
   const nPoints = Math.min(5000, Math.floor((tEnd / 60) / stepMin + 1e-9) + 1);
   for (let p = 0; p < nPoints; p++) {
     const tS = p * stepMin * 60;
     curve.push({ tMin: tS / 60, tempC: tempAt(tS) });
   }
-  if (curve.length === 0 || Math.abs(curve.at(-1)!.tMin - tEnd / 60) > 1e-9) curve.push({ tMin: tEnd / 60, tempC: sol.y.at(-1)![0]! });
+  if (curve.length === 0 || Math.abs(curve.at(-1)!.tMin - tEnd / 60) > 1e-9) curve.push({ tMin: tEnd / 60, tempC: sol.y.at(-1)![index]! });
 
-  const t0 = input.initialTempC;
   const target = input.targetTempC;
   const band = input.targetBand;
   let minC = t0;
@@ -265,7 +334,7 @@ function analyseCurve(
     const tb = sol.t[s + 1]!;
     for (let q = 1; q <= SUBSTEPS; q++) {
       const time = ta + ((tb - ta) * q) / SUBSTEPS;
-      const T = hermiteAt(sol, s, 0, time);
+      const T = hermiteAt(sol, s, index, time);
       if (T < minC) minC = T;
       if (T > maxC) maxC = T;
       if (timeToTarget === null && target !== undefined && reached(T)) {
