@@ -1,5 +1,6 @@
 import type { z } from 'zod';
-import { BRIEF_DEFAULTS, briefSchema, type Brief, type PackType } from '@shared/schemas/briefs';
+import { LOAD_CP_HINT_J_PER_GK } from '@shared/evaluation/load';
+import { BRIEF_DEFAULTS, briefSchema, type Brief, type LoadKind, type PackType } from '@shared/schemas/briefs';
 
 /** What the brief form holds (the schema's input) and what it hands over once valid (its output). */
 export type BriefFormInput = z.input<typeof briefSchema>;
@@ -31,6 +32,14 @@ export const BRIEF_FIELDS = [
   'packaging.massG',
   'packaging.heatCapacityJPerK',
   'packaging.cost',
+  'load',
+  'load.kind',
+  'load.massG',
+  'load.cpJPerGK',
+  'load.initialTempC',
+  'load.uaToPackWPerK',
+  'load.contactAreaM2',
+  'load.uaToEnvWPerK',
   'notes',
 ] as const;
 
@@ -42,7 +51,14 @@ export function newBriefValues(): BriefFormInput {
 
 /** The form's values for a stored brief (its spec has every default applied). */
 export function briefValues(spec: Brief): BriefFormInput {
-  return { ...spec, packaging: { ...spec.packaging } };
+  // Briefs stored before the load was part of a brief have none.
+  return { ...spec, packaging: { ...spec.packaging }, load: spec.load ? { ...spec.load } : null };
+}
+
+/** A load of a kind, as the form starts it: typical mass and heat capacity (evaluation/load.ts hints), coupled by a contact area. */
+export function newLoadValues(kind: LoadKind): NonNullable<BriefFormInput['load']> {
+  const massG = kind === 'food-drink' ? 227 : kind === 'limb-through-fabric' ? 1500 : 500;
+  return { kind, massG, cpJPerGK: LOAD_CP_HINT_J_PER_GK[kind], initialTempC: null, uaToPackWPerK: null, contactAreaM2: 0.015, uaToEnvWPerK: 0 };
 }
 
 /** The pack-type defaults that follow a change of pack type (target and surface limits). */

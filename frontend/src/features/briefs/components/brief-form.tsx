@@ -1,7 +1,7 @@
 import { useState, type ReactNode } from 'react';
 import { useForm, useWatch, type FieldPath, type UseFormReturn } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { briefSchema, type PackType } from '@shared/schemas/briefs';
+import { briefSchema, type LoadKind, type PackType } from '@shared/schemas/briefs';
 import type { BriefRecord } from '@shared/schemas/runs';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
@@ -16,6 +16,7 @@ import {
   fieldSentence,
   moneyFrom,
   newBriefValues,
+  newLoadValues,
   numberFrom,
   packTypeDefaults,
   type BriefFormInput,
@@ -23,7 +24,7 @@ import {
 } from './brief-form-values';
 import { HazardClassList } from './hazard-class-list';
 import { IngredientChoice } from './ingredient-choice';
-import { CONTACT_NAMES, OBJECTIVE_NAMES, PACK_TYPE_NAMES } from './labels';
+import { CONTACT_NAMES, LOAD_KIND_NAMES, OBJECTIVE_NAMES, PACK_TYPE_NAMES } from './labels';
 
 type Form = UseFormReturn<BriefFormInput, unknown, BriefFormOutput>;
 
@@ -66,6 +67,8 @@ export function BriefForm({
   const hazardClasses = (useWatch({ control: form.control, name: 'excludedHazardClasses' }) ?? []) as string[];
   const [usesUa, setUsesUa] = useState(() => brief?.spec.uaWPerK !== null && brief?.spec.uaWPerK !== undefined);
   const cold = packType === 'cold';
+  const load = useWatch({ control: form.control, name: 'load' }) as BriefFormInput['load'];
+  const [loadByUa, setLoadByUa] = useState(() => brief?.spec.load?.uaToPackWPerK !== null && brief?.spec.load?.uaToPackWPerK !== undefined);
 
   const onError = (error: unknown) => {
     if (isApiError(error) && error.status === 409) {
@@ -195,6 +198,56 @@ export function BriefForm({
               </SelectField>
             )}
             <Num form={form} name="packAreaM2" label="Pack area (m²)" hint="Outer area; 0.03 m² is both faces of a 15 × 10 cm pouch." />
+          </div>
+        </Section>
+
+        <Section
+          title="What the pack serves"
+          description="A pack heats or cools something: a meal, a limb, a box's contents. With a load, the target and the hold apply to the load's temperature; the surface limits stay on the pack."
+        >
+          <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+            <SelectField
+              label="The pack heats or cools"
+              value={load?.kind ?? 'none'}
+              onChange={(e) => {
+                const kind = e.target.value;
+                form.setValue('load', kind === 'none' ? null : newLoadValues(kind as LoadKind), { shouldDirty: true, shouldValidate: form.formState.isSubmitted });
+                setLoadByUa(false);
+              }}
+            >
+              <option value="none">Only itself (no load)</option>
+              {(Object.keys(LOAD_KIND_NAMES) as LoadKind[]).map((k) => (
+                <option key={k} value={k}>
+                  {LOAD_KIND_NAMES[k]}
+                </option>
+              ))}
+            </SelectField>
+            {load && (
+              <>
+                <Num form={form} name="load.massG" label="Load mass (g)" hint="An 8-ounce entrée is 227 g." empty={Number.NaN} />
+                <Num form={form} name="load.cpJPerGK" label="Load heat capacity (J/(g·K))" hint="Water 4.18; a wet meal about 3.6." empty={Number.NaN} />
+                <Num form={form} name="load.initialTempC" label="Load start temperature (°C)" hint="Empty: the ambient temperature." empty={null} />
+                <SelectField
+                  label="Load coupled to the pack by"
+                  value={loadByUa ? 'ua' : 'area'}
+                  onChange={(e) => {
+                    const ua = e.target.value === 'ua';
+                    setLoadByUa(ua);
+                    form.setValue('load.uaToPackWPerK', ua ? 1 : null, { shouldDirty: true });
+                    form.setValue('load.contactAreaM2', ua ? null : 0.015, { shouldDirty: true });
+                  }}
+                >
+                  <option value="area">A contact area</option>
+                  <option value="ua">A known UA (W/K)</option>
+                </SelectField>
+                {loadByUa ? (
+                  <Num form={form} name="load.uaToPackWPerK" label="UA, pack to load (W/K)" empty={Number.NaN} />
+                ) : (
+                  <Num form={form} name="load.contactAreaM2" label="Contact area, pack to load (m²)" hint="One face of a 15 × 10 cm pouch is 0.015 m²." empty={Number.NaN} />
+                )}
+                <Num form={form} name="load.uaToEnvWPerK" label="UA, load to its surroundings (W/K)" hint="0: the load is wrapped with the pack." empty={0} />
+              </>
+            )}
           </div>
         </Section>
 

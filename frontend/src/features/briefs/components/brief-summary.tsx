@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import type { BriefRecord } from '@shared/schemas/runs';
 import { formatMoney, formatNumber, formatQuantity } from '@/lib/format';
-import { CONTACT_NAMES, OBJECTIVE_NAMES, PACK_TYPE_NAMES } from './labels';
+import { CONTACT_NAMES, OBJECTIVE_NAMES, PACK_TYPE_NAMES, LOAD_KIND_NAMES } from './labels';
 
 function Group({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -55,6 +55,11 @@ export function BriefSummary({ brief, currency }: { brief: BriefRecord; currency
           {s.maxSurfaceTempC !== null ? `≤ ${formatQuantity(s.maxSurfaceTempC, '°C')}` : 'no upper limit'}
         </Row>
         <Row label="Gas">≤ {formatQuantity(s.maxGasL, 'L', 2)}</Row>
+        <Row label="Serves">
+          {s.load
+            ? `${LOAD_KIND_NAMES[s.load.kind]}: ${formatQuantity(s.load.massG, 'g', 0)} at ${formatQuantity(s.load.cpJPerGK, 'J/(g·K)', 2)}, ${s.load.uaToPackWPerK !== null ? `UA ${formatQuantity(s.load.uaToPackWPerK, 'W/K', 2)}` : `${formatQuantity(s.load.contactAreaM2 ?? 0, 'm²', 3)} in contact`} (target and hold apply to it)`
+            : 'the pack itself'}
+        </Row>
       </Group>
       <Group title="Optimiser and packaging">
         <Row label="Objective">{OBJECTIVE_NAMES[s.objective]}</Row>

@@ -40,6 +40,8 @@ export function BenchResults({
   const cooling = startC - result.minTempC >= result.maxTempC - startC;
   const series: ChartSeries[] = [
     { id: 'pack', label: 'Pack temperature', tone: cooling ? 'frost' : 'ember', points: result.curve.map((p) => ({ x: p.tMin, y: p.tempC })) },
+    // The load the pack serves; the target band is judged on it.
+    ...(result.load ? [{ id: 'load', label: 'Load temperature', tone: 'ink' as const, dashed: true, points: result.load.curve.map((p) => ({ x: p.tMin, y: p.tempC })) }] : []),
   ];
   const bands: ChartBand[] = band ? [{ from: band.minC, to: band.maxC, label: 'Target band', tone: 'moss' }] : [];
   const rules: ChartRule[] = ambientC !== null ? [{ axis: 'y', value: ambientC, label: `Ambient ${formatQuantity(ambientC, '°C')}`, tone: 'ink' }] : [];
@@ -50,6 +52,13 @@ export function BenchResults({
     <div className="flex flex-col gap-5">
       <dl className="grid grid-cols-2 gap-3 md:grid-cols-4">
         <Figure label="End temperature" value={formatQuantity(result.endTempC, '°C')} note="at the end of the hold" />
+        {result.load && (
+          <Figure
+            label="Load at the end"
+            value={formatQuantity(result.load.endTempC, '°C')}
+            note={`warmest ${formatQuantity(result.load.maxTempC, '°C')}, coldest ${formatQuantity(result.load.minTempC, '°C')}; the target band is judged on the load`}
+          />
+        )}
         <Figure
           label={cooling ? 'Lowest temperature' : 'Highest temperature'}
           value={formatQuantity(cooling ? result.minTempC : result.maxTempC, '°C')}

@@ -1,6 +1,7 @@
 import { useMemo } from 'react';
 import { useFieldArray, useForm, useWatch, type UseFormRegister } from 'react-hook-form';
 import type { ChemistryLibrary } from '@shared/chemistry';
+import type { LoadKind } from '@shared/schemas/briefs';
 import type { Ingredient } from '@shared/schemas/library';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
@@ -15,6 +16,13 @@ import { useEvaluateMixtureOnServer } from '../api/evaluate-mixture-on-server';
 import { BLANK_COMPONENT, DEFAULT_BENCH, benchRequest, type BenchValues } from '../lib/bench-values';
 import { useLiveEvaluation } from '../lib/use-live-evaluation';
 import { BenchResults } from './bench-results';
+
+/** The loads a pack may serve, as the bench names them. */
+const LOAD_KINDS: Record<LoadKind, string> = {
+  'food-drink': 'A meal or a drink',
+  'limb-through-fabric': 'A limb, through fabric',
+  'cold-chain-box': 'A cold-chain box’s contents',
+};
 
 const EXCHANGES: { value: BenchValues['exchange']; label: string }[] = [
   { value: 'still-air', label: 'Still air (both faces)' },
@@ -162,6 +170,28 @@ export function MixtureBench({ library, ingredients }: { library: ChemistryLibra
               <NumberField name="bandMinC" label="Target band from (°C)" hint="Optional." register={form.register} error={errorOf('bandMinC')} />
               <NumberField name="bandMaxC" label="Target band to (°C)" register={form.register} error={errorOf('bandMaxC')} />
             </fieldset>
+
+            <fieldset className="grid grid-cols-2 gap-3">
+              <legend className="mb-2 text-small font-bold text-ink-900">What the pack heats or cools</legend>
+              <SelectField label="Load" hint="With a load, the target band applies to it." error={errorOf('loadKind')} {...form.register('loadKind')}>
+                <option value="none">None (the pack itself)</option>
+                {(Object.keys(LOAD_KINDS) as LoadKind[]).map((k) => (
+                  <option key={k} value={k}>
+                    {LOAD_KINDS[k]}
+                  </option>
+                ))}
+              </SelectField>
+              {values.loadKind !== 'none' && (
+                <>
+                  <NumberField name="loadMassG" label="Load mass (g)" register={form.register} error={errorOf('loadMassG')} />
+                  <NumberField name="loadCpJPerGK" label="Load heat capacity (J/(g·K))" hint="Water 4.18; a wet meal about 3.6." register={form.register} error={errorOf('loadCpJPerGK')} />
+                  <NumberField name="loadInitialTempC" label="Load start temperature (°C)" hint="Empty: ambient." register={form.register} error={errorOf('loadInitialTempC')} />
+                  <NumberField name="loadContactAreaM2" label="Contact area, pack to load (m²)" hint="Or give a UA instead." register={form.register} error={errorOf('loadContactAreaM2')} />
+                  <NumberField name="loadUaToPackWPerK" label="UA, pack to load (W/K)" hint="Or a contact area." register={form.register} error={errorOf('loadUaToPackWPerK')} />
+                  <NumberField name="loadUaToEnvWPerK" label="UA, load to surroundings (W/K)" hint="0: wrapped with the pack." register={form.register} error={errorOf('loadUaToEnvWPerK')} />
+                </>
+              )}
+            </fieldset>
           </form>
         </CardBody>
       </Card>
@@ -232,7 +262,20 @@ function NumberField({
   error,
   register,
 }: {
-  name: 'initialTempC' | 'ambientC' | 'uaWPerK' | 'packHeatCapacityJPerK' | 'holdMin' | 'bandMinC' | 'bandMaxC';
+  name:
+    | 'initialTempC'
+    | 'ambientC'
+    | 'uaWPerK'
+    | 'packHeatCapacityJPerK'
+    | 'holdMin'
+    | 'bandMinC'
+    | 'bandMaxC'
+    | 'loadMassG'
+    | 'loadCpJPerGK'
+    | 'loadInitialTempC'
+    | 'loadContactAreaM2'
+    | 'loadUaToPackWPerK'
+    | 'loadUaToEnvWPerK';
   label: string;
   hint?: string;
   error?: string;

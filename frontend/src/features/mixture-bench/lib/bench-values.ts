@@ -1,4 +1,5 @@
 import { evaluateMixtureRequestSchema, type EvaluateMixtureRequest } from '@shared/schemas/mixtures';
+import type { LoadKind } from '@shared/schemas/briefs';
 import type { ContactCase } from '@shared/thermal';
 
 /** A contact case of the thermal model, or a UA given directly. */
@@ -22,7 +23,25 @@ export type BenchValues = {
   holdMin: string;
   bandMinC: string;
   bandMaxC: string;
+  /** What the pack heats or cools: 'none' or a load kind (schemas/briefs.ts). */
+  loadKind: 'none' | LoadKind;
+  loadMassG: string;
+  loadCpJPerGK: string;
+  loadInitialTempC: string;
+  loadContactAreaM2: string;
+  loadUaToPackWPerK: string;
+  loadUaToEnvWPerK: string;
 };
+
+/** The bench's load fields, by the schema's key. */
+export const LOAD_FIELDS = {
+  massG: 'loadMassG',
+  cpJPerGK: 'loadCpJPerGK',
+  initialTempC: 'loadInitialTempC',
+  contactAreaM2: 'loadContactAreaM2',
+  uaToPackWPerK: 'loadUaToPackWPerK',
+  uaToEnvWPerK: 'loadUaToEnvWPerK',
+} as const;
 
 export const BLANK_COMPONENT: BenchComponentValues = { source: 'ingredient', ingredientId: '', formula: '', massG: '' };
 
@@ -36,6 +55,13 @@ export const DEFAULT_BENCH: BenchValues = {
   holdMin: '20',
   bandMinC: '',
   bandMaxC: '',
+  loadKind: 'none',
+  loadMassG: '227',
+  loadCpJPerGK: '3.6',
+  loadInitialTempC: '',
+  loadContactAreaM2: '0.015',
+  loadUaToPackWPerK: '',
+  loadUaToEnvWPerK: '0',
 };
 
 export type BenchErrors = Record<string, string>;
@@ -61,6 +87,8 @@ function benchField(path: string, rows: number[]): string {
   if (path.startsWith('targetBand.minC')) return 'bandMinC';
   if (path.startsWith('targetBand')) return 'bandMaxC';
   if (path.startsWith('contact')) return 'exchange';
+  const load = /^load\.(\w+)/.exec(path);
+  if (load) return LOAD_FIELDS[load[1] as keyof typeof LOAD_FIELDS] ?? 'loadKind';
   return path || 'components';
 }
 
@@ -104,6 +132,19 @@ export function benchRequest(values: BenchValues): { request: EvaluateMixtureReq
     packHeatCapacityJPerK: num(values.packHeatCapacityJPerK) ?? 0,
     holdMin: num(values.holdMin),
     ...(minC !== undefined && maxC !== undefined ? { targetBand: { minC, maxC } } : {}),
+    ...(values.loadKind !== 'none'
+      ? {
+          load: {
+            kind: values.loadKind,
+            massG: num(values.loadMassG),
+            cpJPerGK: num(values.loadCpJPerGK),
+            initialTempC: num(values.loadInitialTempC) ?? null,
+            contactAreaM2: num(values.loadContactAreaM2) ?? null,
+            uaToPackWPerK: num(values.loadUaToPackWPerK) ?? null,
+            uaToEnvWPerK: num(values.loadUaToEnvWPerK) ?? 0,
+          },
+        }
+      : {}),
   };
   const parsed = evaluateMixtureRequestSchema.safeParse(candidate);
   if (!parsed.success) {
