@@ -128,7 +128,7 @@ export function simulateModel(model: PackModel, input: Omit<TimeProfileInput, 'c
   const tEnv = input.envTempC;
   const xdot = new Array<number>(n).fill(0);
   const xb = new Array<number>(n).fill(0);
-  const scales = extentScales(model);
+  const scales = model.extentScales();
 
   // y = [T, x_0 … x_{n−1}, heat lost (J)]
   const rhs = (_t: number, y: readonly number[], dy: number[]) => {
@@ -172,9 +172,9 @@ export function simulateModel(model: PackModel, input: Omit<TimeProfileInput, 'c
   const energy = energyBreakdown(model, { tempC: input.initialTempC, x: x0 }, { tempC: endT, x: xEnd }, lostJ);
 
   const stats = analyseCurve(sol, input);
-  const ice = xEnd[model.iceIndex]!;
+  const ice = model.iceG(xEnd);
   const solutes: SoluteProgress[] = model.solutes.map((s, j) => {
-    const fraction = s.availableMol > 0 ? Math.min(1, Math.max(0, xEnd[j]! / s.availableMol)) : 1;
+    const fraction = model.dissolvedFraction(j, xEnd);
     const limitedBy: DissolutionLimit = fraction >= 1 - 1e-6 ? 'none' : ice > 1e-6 ? 'ice' : 'solubility';
     return { label: s.label, soluteKey: s.soluteKey, dissolvedFraction: fraction, limitedBy };
   });
@@ -192,17 +192,6 @@ export function simulateModel(model: PackModel, input: Omit<TimeProfileInput, 'c
     stats: { steps: sol.t.length - 1, rhsEvaluations: sol.rhsEvaluations, rejectedSteps: sol.rejectedSteps },
     extents: xEnd,
   };
-}
-
-/** A size for each extent (its largest possible value), for tolerances and difference steps. */
-function extentScales(model: PackModel): number[] {
-  const s: number[] = [];
-  for (const m of model.solutes) s.push(Math.max(m.availableMol, 1e-6));
-  for (const m of model.reactions) s.push(Math.max(m.maxExtentMol, 1e-6));
-  for (let c = 0; c < model.crystals.length; c++) s.push(1);
-  for (const m of model.oxidations) s.push(Math.max(m.maxO2Mol, 1e-6));
-  s.push(Math.max(model.waterBaseG, 1e-3));
-  return s;
 }
 
 /** ∂H/∂x_i at (T, x), J per unit of x_i, by central difference (one-sided at x_i ≈ 0). */
