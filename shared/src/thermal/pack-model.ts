@@ -115,6 +115,7 @@ export class PackModel {
       }
       this.addProcess(process, component.massG, label, options, field);
     });
+    this.dissolution.finish();
     this.waterBaseG = water;
     this.totalMassG = total;
     this.packHeatCapacityJPerK = options.packHeatCapacityJPerK ?? 0;

@@ -3,6 +3,7 @@ import { FALLBACK_SOLID_CP_J_PER_GK, REFERENCE_TEMP_C, WATER_CP_J_PER_GK, WATER_
 import { ThermalModelError } from '../errors';
 import type { DissolutionProcess } from '../process';
 import type { HeatCapacityParts, MassInventory, ModelContext, ProcessRef } from './common';
+import { hydrateFamily, stablePhaseIndex, type HydrateFamily } from './hydrates';
 
 /**
  * Dissolution of solids in the pack's water (DESIGN.md §4.2): one extent per solute, the mol
@@ -10,7 +11,36 @@ import type { HeatCapacityParts, MassInventory, ModelContext, ProcessRef } from 
  * solution at the current concentration plus the enthalpy of releasing the hydrate water,
  * Hess's law), its heat capacity (Laliberté's mixing rule), solubility, the freezing-point
  * depression the ice module reads, rates and equilibrium extents.
+ *
+ * A salt leaves solution as the solid stable at the temperature (hydrates.ts): MgSO4·7H2O,
+ * Na2SO4·10H2O below 32.4 °C, CaCl2·6H2O below 29.8 °C, …, binding its crystal water. Each such
+ * phase other than the charged solid has its own extent p (mol precipitated). With d the mol
+ * of the charged solid dissolved, the solution holds D = d − Σp mol of solute and the liquid
+ * gains h_c·d − Σ h_p·p mol of water; the enthalpy at 25 °C is
+ *   D·ΔsolH(n) + d·ΔH_dehyd(charged) − Σ p·ΔH_dehyd(phase),
+ *   ΔH_dehyd(phase) = ΔfH(anhydrous) + h·ΔfH(H2O, l) − ΔfH(phase)   (Hess's law, NBS 1982),
+ * so a solution that cools below saturation gives back the heat of crystallising the hydrate,
+ * not that of the anhydrous salt. A charged solid that is not the stable phase at T (anhydrous
+ * MgSO4 in water) dissolves completely and the stable phase precipitates to saturation.
  */
+
+/** Molar heat capacity of water of crystallisation, J/(mol·K): Kopp–Neumann additivity with ice's Cp (≈ 38 J/(mol·K), CRC Handbook). Assumption for hydrates without Cp°. */
+const CRYSTAL_WATER_CP_J_PER_MOL_K = 38;
+/** Liquid water, g, below which a metastable solid's dissolution slows to a stop (smooth switch). Assumption. */
+const DISSOLVE_WATER_SCALE_G = 0.01;
+
+export interface PrecipitateModel {
+  label: string;
+  /** Index of the solute it comes from. */
+  solute: number;
+  /** Index of the phase in the solute's family. */
+  phaseIndex: number;
+  key: string;
+  hydrateWater: number;
+  molarMass: number;
+  cpJPerGK: number;
+  dehydration_kJ_per_mol: number;
+}
 
 export interface SoluteModel {
   label: string;
@@ -28,24 +58,95 @@ export interface SoluteModel {
   /** Anchoring coefficient of the colligative estimate, kg/mol (0 = ideal). */
   colligativeB: number;
   portFreezing: boolean;
+  /** The solid phases the solute can leave solution as, or null (it returns as the charged solid). */
+  family: HydrateFamily | null;
+  /** Index of the charged solid in the family, or −1. */
+  chargedPhaseIndex: number;
+  /** Index into `precipitates` per family phase, or −1 (the charged solid itself). */
+  precipitateIndex: number[];
 }
 
 export class DissolutionProcesses {
   readonly solutes: SoluteModel[] = [];
+  readonly precipitates: PrecipitateModel[] = [];
   offset = 0;
 
   constructor(private readonly ctx: ModelContext) {}
 
   get size(): number {
-    return this.solutes.length;
+    return this.solutes.length + this.precipitates.length;
+  }
+
+  /** Offset of precipitate q in x. */
+  private pOff(q: number): number {
+    return this.offset + this.solutes.length + q;
   }
 
   refs(): ProcessRef[] {
-    return this.solutes.map((s) => ({ label: s.label, kind: 'dissolution' as const }));
+    return [
+      ...this.solutes.map((s) => ({ label: s.label, kind: 'dissolution' as const })),
+      ...this.precipitates.map((p) => ({ label: p.label, kind: 'precipitation' as const })),
+    ];
   }
 
   scales(): number[] {
-    return this.solutes.map((s) => Math.max(s.availableMol, 1e-6));
+    return [...this.solutes.map((s) => Math.max(s.availableMol, 1e-6)), ...this.precipitates.map((p) => Math.max(this.solutes[p.solute]!.availableMol, 1e-6))];
+  }
+
+  /** Build the precipitate extents once every solute is known (their offsets follow the solutes). */
+  private addPrecipitates(j: number, field: string): void {
+    const s = this.solutes[j]!;
+    const family = s.family;
+    if (!family) return;
+    const port = this.ctx.port;
+    const hAnh = port.formationEnthalpy_kJ_per_mol(s.soluteKey);
+    const hWater = port.formationEnthalpy_kJ_per_mol('H2O(l)');
+    family.phases.forEach((ph, k) => {
+      if (k === s.chargedPhaseIndex) return;
+      const hPhase = ph.key === s.soluteKey ? hAnh : port.formationEnthalpy_kJ_per_mol(ph.key);
+      if (hAnh === null || hWater === null || hPhase === null) {
+        throw new ThermalModelError(`expected ΔfH° of ${s.soluteKey}, ${ph.key} and H2O(l) for the solid that leaves solution, found none`, {
+          field: `${field}.process.soluteKey`,
+        });
+      }
+      const molarMass = port.molarMass_g_per_mol(ph.key);
+      const cpMolar = port.heatCapacity_J_per_mol_K(ph.key) ?? (port.heatCapacity_J_per_mol_K(s.soluteKey) ?? s.soluteMolarMass * FALLBACK_SOLID_CP_J_PER_GK) + ph.hydrateWater * CRYSTAL_WATER_CP_J_PER_MOL_K;
+      s.precipitateIndex[k] = this.precipitates.length;
+      this.precipitates.push({
+        label: `${s.label} → ${ph.key}`,
+        solute: j,
+        phaseIndex: k,
+        key: ph.key,
+        hydrateWater: ph.hydrateWater,
+        molarMass,
+        cpJPerGK: cpMolar / molarMass,
+        dehydration_kJ_per_mol: hAnh + ph.hydrateWater * hWater - hPhase,
+      });
+    });
+  }
+
+  /** True when the charged solid of solute j is the phase stable at `tempC` (or the solute has no hydrate family). */
+  chargedIsStable(j: number, tempC: number): boolean {
+    const s = this.solutes[j]!;
+    return !s.family || s.chargedPhaseIndex === stablePhaseIndex(s.family, tempC);
+  }
+
+  /** The precipitate that forms from solute j at `tempC`, or −1 when it returns as the charged solid. */
+  private stablePrecipitate(j: number, tempC: number): number {
+    const s = this.solutes[j]!;
+    if (!s.family) return -1;
+    const k = stablePhaseIndex(s.family, tempC);
+    const gap = s.family.phases[k]!.gap;
+    if (gap && tempC >= gap.fromC && tempC < gap.toC) {
+      this.ctx.warnings.add(
+        {
+          code: 'thermal.hydrate-phase-substituted',
+          message: `${s.soluteKey} leaves solution as ${gap.realPhase} between ${gap.fromC} and ${gap.toC === Infinity ? '…' : gap.toC} °C, which the species data lack; ${s.family.phases[k]!.key} stands in for it`,
+        },
+        s.soluteKey,
+      );
+    }
+    return s.precipitateIndex[k] ?? -1;
   }
 
   add(process: DissolutionProcess, massG: number, label: string, field: string): void {
@@ -107,7 +208,27 @@ export class DissolutionProcesses {
       eutectic,
       colligativeB: b,
       portFreezing: typeof port.freezingPointDepression_K === 'function',
+      family: null,
+      chargedPhaseIndex: -1,
+      precipitateIndex: [],
     });
+    this.pendingFamilies.push({ j: this.solutes.length - 1, field });
+  }
+
+  private readonly pendingFamilies: { j: number; field: string }[] = [];
+
+  /** Called once all components are added: attach each solute's hydrate family and its precipitates. */
+  finish(): void {
+    for (const { j, field } of this.pendingFamilies) {
+      const s = this.solutes[j]!;
+      const family = hydrateFamily(s.soluteKey);
+      if (!family) continue;
+      s.family = family;
+      s.chargedPhaseIndex = family.phases.findIndex((p) => p.key === s.solidKey);
+      s.precipitateIndex = family.phases.map(() => -1);
+      this.addPrecipitates(j, field);
+    }
+    this.pendingFamilies.length = 0;
   }
 
   /** Specific heat of a solid from its Cp°/M, or the fallback with a warning. */
@@ -127,13 +248,29 @@ export class DissolutionProcesses {
   /** Liquid water released by the dissolved hydrates, g. */
   waterReleasedG(x: readonly number[]): number {
     let w = 0;
-    for (let j = 0; j < this.solutes.length; j++) w += this.solutes[j]!.hydrateWater * x[this.offset + j]! * WATER_MOLAR_MASS_G_PER_MOL;
-    return w;
+    for (let j = 0; j < this.solutes.length; j++) w += this.solutes[j]!.hydrateWater * x[this.offset + j]!;
+    for (let q = 0; q < this.precipitates.length; q++) w -= this.precipitates[q]!.hydrateWater * x[this.pOff(q)]!;
+    return w * WATER_MOLAR_MASS_G_PER_MOL;
   }
 
-  /** Mol of solute j in solution. */
+  /** Net water of solute j (released by its charged solid less bound in its precipitates), g. */
+  private netWaterG(x: readonly number[], j: number): number {
+    const s = this.solutes[j]!;
+    let w = s.hydrateWater * x[this.offset + j]!;
+    for (const q of s.precipitateIndex) if (q >= 0) w -= this.precipitates[q]!.hydrateWater * x[this.pOff(q)]!;
+    return w * WATER_MOLAR_MASS_G_PER_MOL;
+  }
+
+  /** Mol of solute j precipitated (all phases). */
+  private precipitatedMol(x: readonly number[], j: number): number {
+    let p = 0;
+    for (const q of this.solutes[j]!.precipitateIndex) if (q >= 0) p += x[this.pOff(q)]!;
+    return p;
+  }
+
+  /** Mol of solute j in solution: d − Σp. */
   dissolvedMol(x: readonly number[], j: number): number {
-    return x[this.offset + j]!;
+    return x[this.offset + j]! - this.precipitatedMol(x, j);
   }
 
   /** Fraction of solute j's charged solid that is in solution. */
@@ -152,7 +289,7 @@ export class DissolutionProcesses {
     let dissolvedG = 0;
     const dissolvedGs: number[] = new Array<number>(ns);
     for (let j = 0; j < ns; j++) {
-      const xi = this.dissolvedMol(x, j);
+      const xi = Math.max(0, this.dissolvedMol(x, j));
       dissolvedMol += xi;
       const g = xi * this.solutes[j]!.soluteMolarMass;
       dissolvedGs[j] = g;
@@ -161,23 +298,37 @@ export class DissolutionProcesses {
     let chem = 0;
     const port = this.ctx.port;
     const nH2O = dissolvedMol > 1e-15 ? Math.max(waterG, 1e-9) / WATER_MOLAR_MASS_G_PER_MOL / dissolvedMol : Infinity;
+    const dsolOf = (s: SoluteModel): number => {
+      if (nH2O === Infinity) return port.infiniteDilutionEnthalpy_kJ_per_mol(s.soluteKey);
+      const r = port.integralSolutionEnthalpy_kJ_per_mol(s.soluteKey, nH2O);
+      if (r.warnings.length) this.ctx.warnings.addAll(r.warnings, s.soluteKey);
+      return r.value;
+    };
+    const dsols: (number | null)[] = new Array<number | null>(ns).fill(null);
     for (let j = 0; j < ns; j++) {
       const s = this.solutes[j]!;
       const xi = x[this.offset + j]!;
       let h = 0;
       if (xi !== 0) {
-        let dsol: number;
-        if (nH2O === Infinity) dsol = port.infiniteDilutionEnthalpy_kJ_per_mol(s.soluteKey);
-        else {
-          const r = port.integralSolutionEnthalpy_kJ_per_mol(s.soluteKey, nH2O);
-          if (r.warnings.length) this.ctx.warnings.addAll(r.warnings, s.soluteKey);
-          dsol = r.value;
-        }
+        const dsol = (dsols[j] = dsolOf(s));
         h = xi * (dsol + s.dehydration_kJ_per_mol) * 1000;
       }
       chem += h;
       if (chemOut) chemOut[this.offset + j] = h;
       parts.undissolvedSolids += (s.availableMol - xi) * s.solidMolarMass * s.solidCpJPerGK;
+    }
+    for (let q = 0; q < this.precipitates.length; q++) {
+      const p = this.precipitates[q]!;
+      const pq = x[this.pOff(q)]!;
+      let h = 0;
+      if (pq !== 0) {
+        const s = this.solutes[p.solute]!;
+        const dsol = dsols[p.solute] ?? (dsols[p.solute] = dsolOf(s));
+        h = -pq * (dsol + p.dehydration_kJ_per_mol) * 1000;
+      }
+      chem += h;
+      if (chemOut) chemOut[this.pOff(q)] = h;
+      parts.undissolvedSolids += pq * p.molarMass * p.cpJPerGK;
     }
     const w = Math.max(waterG, 0);
     parts.solution += this.solutionCp(w, dissolvedGs, dissolvedG) * (w + dissolvedG);
@@ -209,8 +360,11 @@ export class DissolutionProcesses {
     let dissolved = 0;
     this.solutes.forEach((s, j) => {
       const xi = x[this.offset + j]!;
-      dissolved += xi * s.soluteMolarMass;
+      dissolved += this.dissolvedMol(x, j) * s.soluteMolarMass;
       inv.undissolvedG += (s.availableMol - xi) * s.solidMolarMass;
+    });
+    this.precipitates.forEach((p, q) => {
+      inv.undissolvedG += x[this.pOff(q)]! * p.molarMass;
     });
     inv.solutionG += waterG + dissolved;
   }
@@ -284,27 +438,70 @@ export class DissolutionProcesses {
   }
 
   /**
-   * Equilibrium without ice at `tempC` given `waterG` of other liquid water: fixed point of
-   * ξ_j = min(available, capacity with the hydrate water of the others).
+   * Equilibrium without ice at `tempC` given `waterG` of other liquid water: fixed point over
+   * the solutes, each with the net water of the others. A solute whose charged solid is stable
+   * at T dissolves up to its solubility (ξ = min(available, capacity)); otherwise the charged
+   * solid dissolves and the stable phase precipitates to saturation (stableEquilibrium).
    */
   equilibriumNoIce(tempC: number, x: number[], waterG: number): void {
     const ns = this.solutes.length;
     const o = this.offset;
-    const hydrateG = (except: number) => {
+    const netOthers = (except: number) => {
       let g = 0;
-      for (let k = 0; k < ns; k++) if (k !== except) g += this.solutes[k]!.hydrateWater * x[o + k]! * WATER_MOLAR_MASS_G_PER_MOL;
+      for (let k = 0; k < ns; k++) if (k !== except) g += this.netWaterG(x, k);
       return g;
     };
     for (let iter = 0; iter < 50; iter++) {
       let change = 0;
       for (let j = 0; j < ns; j++) {
-        const cap = this.capacityMol(j, tempC, waterG + hydrateG(j));
-        const xi = Math.min(this.solutes[j]!.availableMol, cap);
-        change = Math.max(change, Math.abs(xi - x[o + j]!));
-        x[o + j] = xi;
+        const s = this.solutes[j]!;
+        const other = waterG + netOthers(j);
+        const before = [x[o + j]!, ...s.precipitateIndex.map((q) => (q >= 0 ? x[this.pOff(q)]! : 0))];
+        for (const q of s.precipitateIndex) if (q >= 0) x[this.pOff(q)] = 0;
+        const qs = this.stablePrecipitate(j, tempC);
+        if (qs < 0) {
+          x[o + j] = Math.min(s.availableMol, this.capacityMol(j, tempC, other));
+        } else {
+          const r = this.stableEquilibrium(j, qs, tempC, s.availableMol, 0, other);
+          x[o + j] = r.d;
+          x[this.pOff(qs)] = r.p;
+        }
+        const after = [x[o + j]!, ...s.precipitateIndex.map((q) => (q >= 0 ? x[this.pOff(q)]! : 0))];
+        for (let k = 0; k < after.length; k++) change = Math.max(change, Math.abs(after[k]! - before[k]!));
       }
       if (change <= 1e-13) break;
     }
+  }
+
+  /**
+   * Charged solid d (up to `availableMol`) dissolved, stable phase q precipitated to saturation:
+   * (d − P_o − p)·M_a = s/100·(W + h_c·d·M_w − h_o − h_q·p·M_w), W the other liquid water, P_o
+   * and h_o (g) the mol and water of other precipitates of the solute held fixed. Water-limited
+   * (no liquid left): D = 0 and the hydrate takes all the water. A hydrate more dilute than the
+   * saturated solution (above its congruent melting point) cannot precipitate: p = 0.
+   */
+  private stableEquilibrium(j: number, q: number, tempC: number, dMax: number, fixedP: number, otherG: number, fixedWaterG = 0): { d: number; p: number } {
+    const s = this.solutes[j]!;
+    const ph = this.precipitates[q]!;
+    const mw = WATER_MOLAR_MASS_G_PER_MOL;
+    const sol = this.solubilityGPer100g(j, tempC);
+    const hc = s.hydrateWater;
+    const hq = ph.hydrateWater;
+    let d = dMax;
+    const w0 = otherG + hc * d * mw - fixedWaterG;
+    if (w0 <= 0 && hc === 0) return { d: 0, p: 0 };
+    const avail = d - fixedP;
+    const denom = s.soluteMolarMass - (sol * hq * mw) / 100;
+    let p = denom > 0 ? Math.max(0, (avail * s.soluteMolarMass - (sol * Math.max(w0, 0)) / 100) / denom) : 0;
+    p = Math.min(p, Math.max(0, avail));
+    if (w0 - hq * p * mw < 0) {
+      // No liquid left: every mol in solution goes into the hydrate, which takes all the water.
+      if (hq > hc) {
+        d = Math.min(dMax, Math.max(0, (otherG - fixedWaterG + hq * fixedP * mw) / ((hq - hc) * mw)));
+        p = Math.max(0, d - fixedP);
+      } else p = Math.max(0, avail);
+    }
+    return { d, p };
   }
 
   /**
@@ -318,19 +515,42 @@ export class DissolutionProcesses {
   /** Set the dissolved mol (solute order) into x. */
   setDissolved(x: number[], mol: readonly number[]): void {
     for (let j = 0; j < this.solutes.length; j++) x[this.offset + j] = mol[j]!;
+    for (let q = 0; q < this.precipitates.length; q++) x[this.pOff(q)] = 0;
   }
 
   /**
    * Rates: first-order approach of each dissolved amount to the solubility-limited amount at T
-   * in the current liquid water (k per solute).
+   * in the current liquid water (k per solute). A charged solid that is not stable at T
+   * dissolves towards completion while there is liquid water; the stable phase grows towards
+   * saturation and the other phases re-dissolve, with the solute's k (assumption).
    */
   rates(tempC: number, x: readonly number[], liquidG: number, out: number[]): void {
     for (let j = 0; j < this.solutes.length; j++) {
       const s = this.solutes[j]!;
       const xi = x[this.offset + j]!;
-      const own = s.hydrateWater * xi * WATER_MOLAR_MASS_G_PER_MOL;
-      const target = Math.max(0, Math.min(s.availableMol, this.capacityMol(j, tempC, liquidG - own)));
-      out[this.offset + j] = s.kPerS * (target - xi);
+      const qs = this.stablePrecipitate(j, tempC);
+      for (const q of s.precipitateIndex) if (q >= 0 && q !== qs) out[this.pOff(q)] = -s.kPerS * x[this.pOff(q)]!;
+      if (qs < 0) {
+        const own = this.netWaterG(x, j);
+        const target = Math.max(0, Math.min(s.availableMol, this.capacityMol(j, tempC, liquidG - own) + this.precipitatedMol(x, j)));
+        out[this.offset + j] = s.kPerS * (target - xi);
+        continue;
+      }
+      const wet = Math.max(0, liquidG) / (Math.max(0, liquidG) + DISSOLVE_WATER_SCALE_G);
+      out[this.offset + j] = s.kPerS * Math.max(0, s.availableMol - xi) * wet;
+      // Stable phase: its saturation target with d and the other precipitates as they are.
+      const pq = x[this.pOff(qs)]!;
+      let otherP = 0;
+      let otherWaterG = 0;
+      for (const q of s.precipitateIndex) {
+        if (q < 0 || q === qs) continue;
+        otherP += x[this.pOff(q)]!;
+        otherWaterG += this.precipitates[q]!.hydrateWater * x[this.pOff(q)]! * WATER_MOLAR_MASS_G_PER_MOL;
+      }
+      // Liquid water other than solute j's own net water.
+      const otherG = liquidG - this.netWaterG(x, j) ;
+      const r = this.stableEquilibrium(j, qs, tempC, xi, otherP, otherG, otherWaterG);
+      out[this.pOff(qs)] = s.kPerS * (r.p - pq);
     }
   }
 }
