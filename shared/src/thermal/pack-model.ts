@@ -3,7 +3,7 @@ import { ingredientProcessSchema, type IngredientProcess, type IngredientProcess
 import { OxidationProcesses, type OxidationModel } from './processes/air-oxidation';
 import { emptyInventory, emptyParts, WarningCollector, type HeatCapacityParts, type MassInventory, type ModelContext, type ProcessRef } from './processes/common';
 import { DissolutionProcesses, type SoluteModel } from './processes/dissolution';
-import { MeltProcesses, type CrystalModel } from './processes/hydrate-melting';
+import { HydrateMelts, MeltProcesses, type CrystalModel } from './processes/hydrate-melting';
 import { InertParts, type InertModel } from './processes/inert';
 import { ReactionProcesses, type ReactionModel } from './processes/reaction';
 import { WaterPhases } from './processes/water-phases';
@@ -72,6 +72,7 @@ export class PackModel {
   readonly dissolution: DissolutionProcesses;
   readonly reaction: ReactionProcesses;
   readonly melt: MeltProcesses;
+  readonly hydrateMelt: HydrateMelts;
   readonly oxidation: OxidationProcesses;
   readonly inert: InertParts;
   readonly water: WaterPhases;
@@ -88,6 +89,7 @@ export class PackModel {
     this.dissolution = new DissolutionProcesses(ctx);
     this.reaction = new ReactionProcesses(ctx);
     this.melt = new MeltProcesses();
+    this.hydrateMelt = new HydrateMelts(this.dissolution);
     this.oxidation = new OxidationProcesses(ctx);
     this.inert = new InertParts();
     this.water = new WaterPhases(this.dissolution);
@@ -116,6 +118,7 @@ export class PackModel {
       this.addProcess(process, component.massG, label, options, field);
     });
     this.dissolution.finish();
+    this.hydrateMelt.finish();
     this.waterBaseG = water;
     this.totalMassG = total;
     this.packHeatCapacityJPerK = options.packHeatCapacityJPerK ?? 0;
@@ -128,9 +131,9 @@ export class PackModel {
         field: 'packHeatCapacityJPerK',
       });
     }
-    // State layout: dissolution · reactions · melts · oxidations · water phases.
+    // State layout: dissolution (solids, then precipitates) · reactions · melts · oxidations · water phases · hydrate melts.
     let offset = 0;
-    for (const group of [this.dissolution, this.reaction, this.melt, this.oxidation, this.water]) {
+    for (const group of [this.dissolution, this.reaction, this.melt, this.oxidation, this.water, this.hydrateMelt]) {
       group.offset = offset;
       offset += group.size;
       this.processes.push(...group.refs());
@@ -199,6 +202,7 @@ export class PackModel {
       ...this.melt.scales(),
       ...this.oxidation.scales(),
       ...this.water.scales(this.waterBaseG),
+      ...this.hydrateMelt.scales(),
     ];
   }
 
@@ -234,6 +238,7 @@ export class PackModel {
     chem += this.melt.evaluate(x, parts, chemOut);
     chem += this.oxidation.evaluate(x, parts, chemOut);
     chem += this.water.evaluate(x, parts, chemOut);
+    chem += this.hydrateMelt.evaluate(x, parts, chemOut);
     this.inert.evaluate(parts);
     const c =
       (parts.solution +
@@ -262,6 +267,7 @@ export class PackModel {
     this.melt.mass(inv);
     this.oxidation.mass(x, inv);
     this.water.mass(x, inv);
+    this.hydrateMelt.mass(x, inv);
     this.inert.mass(inv);
     return inv;
   }
@@ -286,6 +292,7 @@ export class PackModel {
     const x = this.initialExtents();
     const water = this.reaction.equilibrium(x, this.waterBaseG);
     this.melt.equilibrium(tempC, x);
+    this.hydrateMelt.equilibrium(tempC, x);
     this.oxidation.equilibrium(x);
     // No liquid water left (all consumed by reactions): nothing dissolves, nothing freezes.
     if (water <= 0) return x;
@@ -302,5 +309,6 @@ export class PackModel {
     this.melt.rates(tempC, x, out);
     this.oxidation.rates(x, out);
     this.water.rates(tempC, x, liquid, out);
+    this.hydrateMelt.rates(tempC, x, out);
   }
 }

@@ -3,7 +3,7 @@ import { FALLBACK_SOLID_CP_J_PER_GK, REFERENCE_TEMP_C, WATER_CP_J_PER_GK, WATER_
 import { ThermalModelError } from '../errors';
 import type { DissolutionProcess } from '../process';
 import type { HeatCapacityParts, MassInventory, ModelContext, ProcessRef } from './common';
-import { hydrateFamily, stablePhaseIndex, type HydrateFamily } from './hydrates';
+import { hydrateFamily, meltingHydrate, stablePhaseIndex, type HydrateFamily } from './hydrates';
 
 /**
  * Dissolution of solids in the pack's water (DESIGN.md §4.2): one extent per solute, the mol
@@ -183,6 +183,7 @@ export class DissolutionProcesses {
       }
     }
     let solidCp = process.solidCp_J_per_gK;
+    if (solidCp === undefined && port.heatCapacity_J_per_mol_K(process.solidKey) === null) solidCp = meltingHydrate(process.solidKey)?.solidCpJPerGK;
     if (solidCp === undefined) solidCp = this.solidCpJPerGK(process.solidKey, solidMolarMass);
     const eutectic = process.eutectic ?? port.eutectic?.(soluteKey) ?? null;
     const ions = process.ionsPerFormulaUnit;
@@ -221,7 +222,8 @@ export class DissolutionProcesses {
   finish(): void {
     for (const { j, field } of this.pendingFamilies) {
       const s = this.solutes[j]!;
-      const family = hydrateFamily(s.soluteKey);
+      // A hydrate that melts keeps its own identity (the melt module takes it through its melting point).
+      const family = meltingHydrate(s.solidKey) ? null : hydrateFamily(s.soluteKey);
       if (!family) continue;
       s.family = family;
       s.chargedPhaseIndex = family.phases.findIndex((p) => p.key === s.solidKey);
@@ -259,6 +261,11 @@ export class DissolutionProcesses {
     let w = s.hydrateWater * x[this.offset + j]!;
     for (const q of s.precipitateIndex) if (q >= 0) w -= this.precipitates[q]!.hydrateWater * x[this.pOff(q)]!;
     return w * WATER_MOLAR_MASS_G_PER_MOL;
+  }
+
+  /** Mol of solute j's charged solid not dissolved. */
+  undissolvedMol(x: readonly number[], j: number): number {
+    return this.solutes[j]!.availableMol - x[this.offset + j]!;
   }
 
   /** Mol of solute j precipitated (all phases). */

@@ -59,3 +59,34 @@ export function stablePhaseIndex(family: HydrateFamily, tempC: number): number {
   for (let k = 0; k < family.phases.length; k++) if (tempC < family.phases[k]!.upToC) return k;
   return family.phases.length - 1;
 }
+
+/**
+ * Salt hydrates that melt (phase-change packs): melting point, heat of fusion and the specific
+ * heats of solid and melt. Lane, Solar Heat Storage: Latent Heat Materials, vol. 1 (CRC Press,
+ * 1983), as listed in the review tables of Abhat (Solar Energy 30 (1983) 313) — from memory.
+ * Congruent or not, each is treated as melting at its melting point into a liquid of its own
+ * composition (the usual description of these materials in those tables).
+ */
+export interface MeltingHydrate {
+  key: string;
+  meltingPointC: number;
+  latentHeatJPerG: number;
+  solidCpJPerGK: number;
+  liquidCpJPerGK: number;
+  source: string;
+}
+
+const LANE = 'Lane 1983 / Abhat 1983 (from memory)';
+
+export const MELTING_HYDRATES: readonly MeltingHydrate[] = [
+  { key: 'CaCl2·6H2O(cr)', meltingPointC: 29.8, latentHeatJPerG: 187, solidCpJPerGK: 1.4, liquidCpJPerGK: 2.2, source: LANE },
+  { key: 'Na2SO4·10H2O(cr)', meltingPointC: 32.4, latentHeatJPerG: 254, solidCpJPerGK: 1.9, liquidCpJPerGK: 3.3, source: LANE },
+  { key: 'Na2CO3·10H2O(cr)', meltingPointC: 33, latentHeatJPerG: 247, solidCpJPerGK: 1.8, liquidCpJPerGK: 3.1, source: LANE },
+  { key: 'Na2S2O3·5H2O(cr)', meltingPointC: 48, latentHeatJPerG: 201, solidCpJPerGK: 1.5, liquidCpJPerGK: 2.4, source: LANE },
+  { key: 'CH3COONa·3H2O(cr)', meltingPointC: 58, latentHeatJPerG: 264, solidCpJPerGK: 1.9, liquidCpJPerGK: 3.0, source: LANE },
+  { key: 'MgCl2·6H2O(cr)', meltingPointC: 116.7, latentHeatJPerG: 168.6, solidCpJPerGK: 2.25, liquidCpJPerGK: 2.61, source: LANE },
+];
+
+export function meltingHydrate(solidKey: string): MeltingHydrate | null {
+  return MELTING_HYDRATES.find((h) => h.key === solidKey) ?? null;
+}
