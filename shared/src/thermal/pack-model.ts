@@ -155,7 +155,9 @@ export class PackModel {
         this.inert.add(process, massG, label);
         return;
       case 'dissolution':
-        this.dissolution.add(process, massG, label, field);
+        // Ice charged as an ingredient melts and joins the solution (water-phases module); it is not a solute.
+        if (process.solidKey === 'H2O(cr)') this.water.addIce(massG);
+        else this.dissolution.add(process, massG, label, field);
         return;
       case 'reaction':
         this.reaction.add(process, massG, label, field);
@@ -211,9 +213,9 @@ export class PackModel {
     return new Array<number>(this.size).fill(0);
   }
 
-  /** Liquid water, g: charged water + hydrate water released − water consumed by reactions − ice. */
+  /** Liquid water, g: charged water + hydrate water released − water consumed by reactions − water frozen (charged ice melted counts negative). */
   liquidWaterG(x: readonly number[]): number {
-    return this.waterBaseG + this.dissolution.waterReleasedG(x) - this.reaction.waterConsumedG(x) - this.water.iceG(x);
+    return this.waterBaseG + this.dissolution.waterReleasedG(x) - this.reaction.waterConsumedG(x) - this.water.frozenG(x);
   }
 
   /** Fraction of solute j's charged solid in solution at extents x. */
@@ -290,7 +292,8 @@ export class PackModel {
    */
   equilibriumExtents(tempC: number): number[] {
     const x = this.initialExtents();
-    const water = this.reaction.equilibrium(x, this.waterBaseG);
+    this.water.meltAll(x);
+    const water = this.reaction.equilibrium(x, this.waterBaseG + this.water.chargedIceG);
     this.melt.equilibrium(tempC, x);
     this.hydrateMelt.equilibrium(tempC, x);
     this.oxidation.equilibrium(x);

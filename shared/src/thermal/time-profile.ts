@@ -199,7 +199,8 @@ function dHdx(model: PackModel, T: number, x: readonly number[], i: number, scal
   const d = 1e-6 * scale;
   for (let k = 0; k < x.length; k++) buf[k] = x[k]!;
   const xi = x[i]!;
-  if (xi - d >= 0) {
+  // Central where the extent is clear of 0 on either side (charged ice melting runs negative).
+  if (xi - d >= 0 || xi + d <= 0) {
     buf[i] = xi + d;
     const hp = model.enthalpyJ(T, buf);
     buf[i] = xi - d;

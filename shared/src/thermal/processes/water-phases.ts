@@ -4,9 +4,12 @@ import type { HeatCapacityParts, MassInventory, ProcessRef } from './common';
 import type { DissolutionProcesses } from './dissolution';
 
 /**
- * The pack's water as ice: one extent, the ice formed (g). Its enthalpy at 25 °C is
- * −ice·L₂₅, L₂₅ = L_fus(0 °C) + (c_water − c_ice)·(25 − 0) K (Kirchhoff's law); ice forms
- * where the solution's freezing point (dissolution module) lies above T.
+ * The pack's water as ice: one extent, the ice formed (g) — negative when ice charged into the
+ * pack (`H2O(cr)`, ice as an ingredient) has melted. Its enthalpy at 25 °C is −ξ·L₂₅,
+ * L₂₅ = L_fus(0 °C) + (c_water − c_ice)·(25 − 0) K (Kirchhoff's law; L_fus = 333.6 J/g, IAPWS /
+ * CRC, constants.ts); ice forms where the solution's freezing point (dissolution module) lies
+ * above T and melts where it lies below, so ice with a salt melts down towards the eutectic
+ * (a freezing mixture).
  */
 
 const L_ICE_REF_J_PER_G = ICE_FUSION_J_PER_G + (WATER_CP_J_PER_GK - ICE_CP_J_PER_GK) * (REFERENCE_TEMP_C - 0);
@@ -15,31 +18,48 @@ const ICE_SMOOTHING_K = 0.2;
 export class WaterPhases {
   offset = 0;
   readonly size = 1;
+  /** Ice charged into the pack, g. */
+  chargedIceG = 0;
 
   constructor(private readonly dissolution: DissolutionProcesses) {}
+
+  /** Ice as an ingredient (`H2O(cr)`). */
+  addIce(massG: number): void {
+    this.chargedIceG += massG;
+  }
 
   refs(): ProcessRef[] {
     return [{ label: 'water', kind: 'freezing' }];
   }
 
   scales(waterBaseG: number): number[] {
-    return [Math.max(waterBaseG, 1e-3)];
+    return [Math.max(waterBaseG + this.chargedIceG, 1e-3)];
   }
 
-  iceG(x: readonly number[]): number {
+  /** Net water frozen since charging, g (negative: charged ice melted). */
+  frozenG(x: readonly number[]): number {
     return x[this.offset]!;
   }
 
+  /** Ice present, g. */
+  iceG(x: readonly number[]): number {
+    return this.chargedIceG + x[this.offset]!;
+  }
+
   evaluate(x: readonly number[], parts: HeatCapacityParts, chemOut?: number[]): number {
-    const ice = x[this.offset]!;
-    const h = -ice * L_ICE_REF_J_PER_G;
+    const h = -x[this.offset]! * L_ICE_REF_J_PER_G;
     if (chemOut) chemOut[this.offset] = h;
-    parts.ice += ice * ICE_CP_J_PER_GK;
+    parts.ice += this.iceG(x) * ICE_CP_J_PER_GK;
     return h;
   }
 
   mass(x: readonly number[], inv: MassInventory): void {
-    inv.iceG += x[this.offset]!;
+    inv.iceG += this.iceG(x);
+  }
+
+  /** Before the equilibrium search: all charged ice taken as melted (the search refreezes what it must). */
+  meltAll(x: number[]): void {
+    x[this.offset] = -this.chargedIceG;
   }
 
   /**
@@ -62,7 +82,7 @@ export class WaterPhases {
     const fSat = residual(tiny);
     if (ns === 0 || fSat <= 0) {
       d.setDissolved(x, new Array<number>(ns).fill(0));
-      x[this.offset] = Math.max(0, waterG);
+      x[this.offset] = Math.max(0, waterG) - this.chargedIceG;
       return;
     }
     const fTop = residual(liquidNoIce);
@@ -72,13 +92,13 @@ export class WaterPhases {
     const xi = d.dissolvedInLiquid(sol, wl);
     d.setDissolved(x, xi);
     const allWater = waterG + d.waterReleasedG(x);
-    x[this.offset] = Math.max(0, allWater - wl);
+    x[this.offset] = Math.max(0, allWater - wl) - this.chargedIceG;
   }
 
   /** Ice relaxes to the ice mass at which the current solution freezes at T. */
   rates(tempC: number, x: readonly number[], liquidG: number, out: number[]): void {
     const d = this.dissolution;
-    const ice = x[this.offset]!;
+    const ice = this.iceG(x);
     const allWater = liquidG + ice;
     let iceEq = 0;
     if (tempC < 0 && allWater > 0) {
