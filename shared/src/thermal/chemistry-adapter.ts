@@ -3,6 +3,7 @@ import {
   enthalpyOfSolutionInfinite,
   eutectic as findEutecticPoint,
   findHeatCapacityCoefficients,
+  findSolubilitySeries,
   findSpecies,
   freezingPoint,
   integralEnthalpyOfSolution,
@@ -19,13 +20,15 @@ import { WATER_CP_J_PER_GK } from './constants';
 
 const NO_WARNINGS: ComputationWarning[] = [];
 const FREEZING_W_MAX = 0.6;
+/** How far below its lowest tabulated temperature a solubility is extrapolated before the warning says it is uncertain, K. Assumption. */
+const SOLUBILITY_EXTRAPOLATION_K = 15;
 
 /**
  * Binds the chemistry layer's functions to the thermal model's {@link ChemistryPort}.
  *
  * The thermal model evaluates enthalpies of solution and solubilities thousands of times per
  * time profile, so each solute's curve is sampled once from the chemistry functions on a dense
- * grid (ln n from the most concentrated tabulated point to 10⁵ mol/mol; 0–100 °C in 0.5 K) and
+ * grid (ln n from the most concentrated tabulated point to 10⁵ mol/mol; the tabulated temperatures within 0–100 °C in 0.5 K) and
  * re-interpolated with the chemistry layer's own monotone cubic (PCHIP). The sampled curves
  * reproduce the chemistry functions to better than 0.01 % (tested); outside the grids the
  * chemistry functions are called directly and their warnings passed on.
@@ -89,19 +92,30 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
   };
 
   interface SolubilityCurve {
+    tMin: number;
+    tMax: number;
     f: (t: number) => number;
+    /** The two lowest tabulated points, for the van 't Hoff extrapolation below the data. */
+    low: { t1: number; s1: number; t2: number; s2: number; solute: string } | null;
   }
   const solubilityCache = new Map<string, SolubilityCurve>();
   const solubilityCurve = (key: string): SolubilityCurve => {
     let c = solubilityCache.get(key);
     if (!c) {
+      const series = findSolubilitySeries(lib, key);
+      const pts = series.points;
+      const tMin = Math.max(0, pts[0]!.tempC);
+      const tMax = Math.min(100, pts[pts.length - 1]!.tempC);
       const xs: number[] = [];
       const ys: number[] = [];
-      for (let t = 0; t <= 100; t += 0.5) {
+      for (let t = tMin; t <= tMax + 1e-9; t += 0.5) {
         xs.push(t);
         ys.push(solubility(lib, key, t).gPer100gWater);
       }
-      c = { f: pchip(xs, ys) };
+      const p1 = pts[0];
+      const p2 = pts[1];
+      const low = p1 && p2 && p1.gPer100gWater > 0 && p2.gPer100gWater > 0 ? { t1: p1.tempC, s1: p1.gPer100gWater, t2: p2.tempC, s2: p2.gPer100gWater, solute: series.solute } : null;
+      c = { tMin, tMax, f: xs.length > 1 ? pchip(xs, ys) : () => ys[0] ?? 0, low };
       solubilityCache.set(key, c);
     }
     return c;
@@ -176,7 +190,29 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
         : enthalpyOfSolutionInfinite(lib, key).dH_kJ_per_mol;
     },
     solubility_g_per_100g(key, tempC): PortValue {
-      if (tempC >= 0 && tempC <= 100) return { value: solubilityCurve(key).f(tempC), warnings: NO_WARNINGS };
+      const c = solubilityCurve(key);
+      if (tempC >= c.tMin && tempC <= c.tMax) return { value: c.f(tempC), warnings: NO_WARNINGS };
+      if (tempC < c.tMin && c.low) {
+        // Below the table: van 't Hoff form, ln s linear in 1/T through the two lowest points
+        // (d ln s/d(1/T) = −ΔsolH_eff/(ν·R), held constant), not a straight line in T that
+        // runs to zero (sodium sulfate: 1.5 g/100 g at 10 °C linear, ≈ 9 on the decahydrate curve).
+        const { t1, s1, t2, s2, solute } = c.low;
+        const inv = (t: number) => 1 / (t + 273.15);
+        const slope = (Math.log(s2) - Math.log(s1)) / (inv(t2) - inv(t1));
+        const value = s1 * Math.exp(slope * (inv(tempC) - inv(t1)));
+        const far = t1 - tempC > SOLUBILITY_EXTRAPOLATION_K;
+        return {
+          value,
+          warnings: [
+            {
+              code: far ? 'thermal.solubility-far-below-data' : 'thermal.solubility-extrapolated',
+              message: far
+                ? `the solubility data of ${solute} start at ${t1} °C; at ${tempC.toFixed(0)} °C, more than ${SOLUBILITY_EXTRAPOLATION_K} K below them, the extrapolated value (${value.toFixed(1)} g/100 g water, van 't Hoff form) is uncertain: measure it or add data`
+                : `the solubility data of ${solute} start at ${t1} °C; below that the value is extrapolated in van 't Hoff form (ln s linear in 1/T) from the two lowest points`,
+            },
+          ],
+        };
+      }
       const r = solubility(lib, key, tempC);
       return { value: r.gPer100gWater, warnings: r.warnings };
     },

@@ -165,9 +165,9 @@ export function describeEndState(
   heatLostJ: number,
   onPlateau: boolean,
 ): EndStateResult {
-  const ice = x[model.iceIndex]!;
+  const ice = model.iceG(x);
   const solutes: SoluteEndState[] = model.solutes.map((s, j) => {
-    const fraction = s.availableMol > 0 ? Math.min(1, Math.max(0, x[j]! / s.availableMol)) : 1;
+    const fraction = model.dissolvedFraction(j, x);
     const limitedBy: DissolutionLimit = fraction >= 1 - 1e-9 ? 'none' : ice > 1e-9 ? 'ice' : 'solubility';
     return { label: s.label, soluteKey: s.soluteKey, dissolvedFraction: fraction, limitedBy };
   });

@@ -163,7 +163,7 @@ export function simulateModel(model: PackModel, input: Omit<TimeProfileInput, 'c
   const tEnv = input.envTempC;
   const xdot = new Array<number>(n).fill(0);
   const xb = new Array<number>(n).fill(0);
-  const scales = extentScales(model);
+  const scales = model.extentScales();
 
   // y = [T, x_0 … x_{n−1}, heat lost (J)]
   const rhs = (_t: number, y: readonly number[], dy: number[]) => {
@@ -212,9 +212,9 @@ export function simulateModel(model: PackModel, input: Omit<TimeProfileInput, 'c
 
   const stats = analyseCurve(sol, input);
   const loadStats = load ? analyseCurve(sol, input, n + 2, load.initialTempC) : null;
-  const ice = xEnd[model.iceIndex]!;
+  const ice = model.iceG(xEnd);
   const solutes: SoluteProgress[] = model.solutes.map((s, j) => {
-    const fraction = s.availableMol > 0 ? Math.min(1, Math.max(0, xEnd[j]! / s.availableMol)) : 1;
+    const fraction = model.dissolvedFraction(j, xEnd);
     const limitedBy: DissolutionLimit = fraction >= 1 - 1e-6 ? 'none' : ice > 1e-6 ? 'ice' : 'solubility';
     return { label: s.label, soluteKey: s.soluteKey, dissolvedFraction: fraction, limitedBy };
   });
@@ -262,23 +262,13 @@ function loadRhs(load: LumpedLoad | undefined, T: number, tEnv: number, y: reado
   return q;
 }
 
-/** A size for each extent (its largest possible value), for tolerances and difference steps. */
-function extentScales(model: PackModel): number[] {
-  const s: number[] = [];
-  for (const m of model.solutes) s.push(Math.max(m.availableMol, 1e-6));
-  for (const m of model.reactions) s.push(Math.max(m.maxExtentMol, 1e-6));
-  for (let c = 0; c < model.crystals.length; c++) s.push(1);
-  for (const m of model.oxidations) s.push(Math.max(m.maxO2Mol, 1e-6));
-  s.push(Math.max(model.waterBaseG, 1e-3));
-  return s;
-}
-
 /** ∂H/∂x_i at (T, x), J per unit of x_i, by central difference (one-sided at x_i ≈ 0). */
 function dHdx(model: PackModel, T: number, x: readonly number[], i: number, scale: number, buf: number[]): number {
   const d = 1e-6 * scale;
   for (let k = 0; k < x.length; k++) buf[k] = x[k]!;
   const xi = x[i]!;
-  if (xi - d >= 0) {
+  // Central where the extent is clear of 0 on either side (charged ice melting runs negative).
+  if (xi - d >= 0 || xi + d <= 0) {
     buf[i] = xi + d;
     const hp = model.enthalpyJ(T, buf);
     buf[i] = xi - d;
