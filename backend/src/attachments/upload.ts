@@ -1,5 +1,6 @@
 import type { RequestHandler } from 'express';
 import multer from 'multer';
+import { textRuleError } from '@shared/schemas';
 import { AppError } from '../http/errors';
 
 interface UploadOptions {
@@ -25,6 +26,9 @@ export function singleUpload(options: UploadOptions): RequestHandler {
     storage: multer.memoryStorage(),
     limits: { fileSize: options.maxBytes, files: 1, fields: 10 },
     fileFilter: (_req, file, cb) => {
+      // The file name is stored and shown: refused, not altered, when it is not plain text.
+      const nameError = textRuleError(file.originalname);
+      if (nameError) return cb(AppError.validation(`The file name ${nameError}. Rename the file and upload it again.`, [{ field: options.field, message: `file name ${nameError}` }]));
       if (!options.accept || options.accept(file)) cb(null, true);
       else cb(unsupportedType(options.field, options.expected, `${file.originalname} (${file.mimetype})`));
     },
