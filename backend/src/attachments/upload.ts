@@ -1,5 +1,6 @@
 import type { RequestHandler } from 'express';
 import multer from 'multer';
+import { textRuleError } from '@shared/schemas';
 import { AppError } from '../http/errors';
 
 interface UploadOptions {
@@ -25,6 +26,9 @@ export function singleUpload(options: UploadOptions): RequestHandler {
     storage: multer.memoryStorage(),
     limits: { fileSize: options.maxBytes, files: 1, fields: 10 },
     fileFilter: (_req, file, cb) => {
+      // The file name is stored and shown: refused, not altered, when it is not plain text.
+      const nameError = textRuleError(file.originalname);
+      if (nameError) return cb(AppError.validation(`The file name ${nameError}. Rename the file and upload it again.`, [{ field: options.field, message: `file name ${nameError}` }]));
       if (!options.accept || options.accept(file)) cb(null, true);
       else cb(unsupportedType(options.field, options.expected, `${file.originalname} (${file.mimetype})`));
     },
@@ -41,9 +45,32 @@ export function singleUpload(options: UploadOptions): RequestHandler {
         }
         return next(AppError.validation(`Upload refused: ${err.message}. Send one file in the form field "${options.field}".`, [{ field: err.field ?? options.field, message: err.message }]));
       }
-      next(err);
+      if (err instanceof AppError) return next(err);
+      // Anything else comes from reading the form itself (busboy): the body is not a
+      // well-formed multipart/form-data request, so it is the client's to fix.
+      next(malformedMultipart(err, options.field));
     });
   };
+}
+
+/**
+ * A 400 for a multipart body the form reader could not read: cut short ("Unexpected end of
+ * form"), a broken part header, no boundary, or another multipart type than form-data.
+ */
+export function malformedMultipart(err: unknown, field: string): AppError {
+  const detail = err instanceof Error ? err.message : String(err);
+  let reason: string;
+  if (/unsupported content type/i.test(detail)) reason = 'the Content-Type must be multipart/form-data';
+  else if (/boundary not found/i.test(detail)) reason = 'the Content-Type names no boundary (multipart/form-data; boundary=…)';
+  else if (/unexpected end of form/i.test(detail)) reason = 'the form ends before its closing boundary';
+  else if (/malformed part header/i.test(detail)) reason = 'a part has a malformed header';
+  else reason = 'the body is not a well-formed multipart/form-data form';
+  return new AppError({
+    status: 400,
+    code: 'malformed_multipart',
+    message: `Upload refused: ${reason} (${detail}). Send one file in the form field "${field}" as multipart/form-data.`,
+    fields: [{ field, message: `must be sent as multipart/form-data: ${reason}` }],
+  });
 }
 
 export function unsupportedType(field: string, expected: string, found: string): AppError {

@@ -1,6 +1,6 @@
 import type { RequestHandler } from 'express';
 import type { z } from 'zod';
-import { fieldErrorsFromZod } from '@shared/schemas';
+import { fieldErrorsFromZod, textRuleErrorsDeep } from '@shared/schemas';
 import { AppError } from './errors';
 
 interface RequestSchemas<B extends z.ZodType, Q extends z.ZodType, P extends z.ZodType> {
@@ -18,7 +18,9 @@ export interface Valid<B = unknown, Q = unknown, P = unknown> {
 
 /**
  * Validates body, query and params with the shared zod schemas. Failure answers 400 naming
- * every field and rule; success stores the parsed values on `res.locals.valid`.
+ * every field and rule; success stores the parsed values on `res.locals.valid`. What a schema
+ * lets through is also checked for text the database cannot hold (NUL, lone surrogates) in
+ * free-form values and keys, so none of it reaches a query.
  */
 export function validate<B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType = z.ZodUnknown, P extends z.ZodType = z.ZodUnknown>(
   schemas: RequestSchemas<B, Q, P>,
@@ -29,9 +31,15 @@ export function validate<B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType
     for (const part of ['params', 'query', 'body'] as const) {
       const schema = schemas[part];
       if (!schema) continue;
-      const result = schema.safeParse(part === 'body' ? (req.body ?? {}) : req[part]);
-      if (result.success) valid[part] = result.data;
-      else fields.push(...fieldErrorsFromZod(result.error, part === 'body' ? undefined : part));
+      const input: unknown = part === 'body' ? (req.body ?? {}) : req[part];
+      const prefix = part === 'body' ? undefined : part;
+      const result = schema.safeParse(input);
+      if (!result.success) fields.push(...fieldErrorsFromZod(result.error, prefix));
+      else {
+        const textErrors = textRuleErrorsDeep(input, prefix);
+        if (textErrors.length > 0) fields.push(...textErrors);
+        else valid[part] = result.data;
+      }
     }
     if (fields.length > 0) {
       const summary = fields.map((f) => `${f.field} ${f.message}`).join('; ');

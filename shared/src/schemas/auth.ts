@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import { emailSchema, passwordSchema, roleSchema } from './common';
+import { emailSchema, loginPasswordSchema, passwordSchema, roleSchema, textSchema } from './common';
 
 export const loginRequestSchema = z.object({
   email: emailSchema,
-  password: z.string({ error: 'is required' }).min(1, 'is required').max(200, 'must be at most 200 characters'),
+  password: loginPasswordSchema,
 });
 export type LoginRequest = z.infer<typeof loginRequestSchema>;
 
@@ -25,7 +25,7 @@ export const meResponseSchema = z.object({ user: sessionUserSchema });
 
 export const passwordResetRequestSchema = z.object({ email: emailSchema });
 export const passwordResetConfirmSchema = z.object({
-  token: z.string({ error: 'is required' }).min(20, 'is not a valid link token').max(200, 'is not a valid link token'),
+  token: textSchema({ error: 'is required' }).min(20, 'is not a valid link token').max(200, 'is not a valid link token'),
   password: passwordSchema,
 });
 export type PasswordResetConfirm = z.infer<typeof passwordResetConfirmSchema>;

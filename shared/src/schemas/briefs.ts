@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema, MAX_ID } from './common';
 import { candidateHazardsSchema } from './hazards';
 
 /**
@@ -40,8 +41,7 @@ export type Objective = z.infer<typeof objectiveSchema>;
 /** Money in the workspace currency: a decimal string such as "0.45"; a JSON number is accepted. */
 export const moneySchema = z.preprocess(
   (v) => (typeof v === 'number' && Number.isFinite(v) ? String(v) : v),
-  z
-    .string({ error: 'must be a decimal amount such as 0.45' })
+  textSchema({ error: 'must be a decimal amount such as 0.45' })
     .trim()
     .refine((s) => !s.startsWith('-'), { message: 'must be 0 or more', abort: true })
     .regex(/^\d{1,8}(\.\d{1,6})?$/, 'must be a decimal amount such as 0.45 (at most 8 digits before and 6 after the point)'),
@@ -50,11 +50,11 @@ export const moneySchema = z.preprocess(
 /** An ingredient id: a positive integer or a non-empty string, normalised to a string. */
 export const ingredientIdSchema = z.preprocess(
   (v) => (typeof v === 'number' && Number.isInteger(v) && v > 0 ? String(v) : v),
-  z.string({ error: 'must be an ingredient id' }).trim().min(1, 'must be an ingredient id').max(120, 'must be at most 120 characters'),
+  textSchema({ error: 'must be an ingredient id' }).trim().min(1, 'must be an ingredient id').max(120, 'must be at most 120 characters'),
 );
 
 /** GHS hazard class code, e.g. `ox-sol-3`, `acute-tox-4-oral`, `eye-irrit-2`. Hazard data arrive with the hazards module. */
-const hazardClassSchema = z.string().trim().min(1, 'must not be empty').max(60, 'must be at most 60 characters');
+const hazardClassSchema = textSchema().trim().min(1, 'must not be empty').max(60, 'must be at most 60 characters');
 
 /**
  * A cap on one ingredient's mass fraction of the fill (the mixture without packaging), e.g.
@@ -66,7 +66,7 @@ export const concentrationCapSchema = z.object({
   /** Highest mass fraction of the fill, 0–1. */
   maxMassFraction: z.number({ error: 'must be a number between 0 and 1' }).min(0, 'must be 0 or more').max(1, 'must be at most 1'),
   /** Why the cap exists (rule id or citation). */
-  reason: z.string().trim().max(300, 'must be at most 300 characters').default('designer cap'),
+  reason: textSchema().trim().max(300, 'must be at most 300 characters').default('designer cap'),
 });
 export type ConcentrationCap = z.infer<typeof concentrationCapSchema>;
 
@@ -158,7 +158,7 @@ const temp = (what: string) =>
 
 /** Fields of a brief with their defaults, before pack-type defaults and cross-field rules. */
 const briefFields = {
-  name: z.string({ error: 'is required' }).trim().min(1, 'is required').max(120, 'must be at most 120 characters'),
+  name: textSchema({ error: 'is required' }).trim().min(1, 'is required').max(120, 'must be at most 120 characters'),
   packType: packTypeSchema.default('cold'),
   /** Temperature of the air around the pack, °C. */
   ambientC: temp('ambientC').default(BRIEF_DEFAULTS.ambientC),
@@ -196,7 +196,7 @@ const briefFields = {
   packaging: packagingSchema.default({ massG: 12, heatCapacityJPerK: 24, cost: '0.08' }),
   /** What the pack heats or cools; null (the default): the pack itself is judged. */
   load: loadSchema.nullable().default(null),
-  notes: z.string({ error: 'must be text' }).max(4000, 'must be at most 4000 characters').default(''),
+  notes: textSchema({ error: 'must be text' }).max(4000, 'must be at most 4000 characters').default(''),
 };
 
 const briefObjectSchema = z.object(briefFields);
@@ -293,7 +293,7 @@ export const updateBriefRequestSchema = z
       [K in keyof typeof briefFields]: z.ZodOptional<z.ZodType<z.output<(typeof briefFields)[K]>, z.input<(typeof briefFields)[K]>>>;
     },
   )
-  .extend({ version: z.number({ error: 'is required' }).int().min(0) });
+  .extend({ version: z.number({ error: 'is required' }).int().min(0).max(MAX_ID, `must be at most ${MAX_ID}`) });
 export type UpdateBriefRequest = z.output<typeof updateBriefRequestSchema>;
 
 // ---------------------------------------------------------------------------------------------

@@ -12,25 +12,105 @@ export const ROLE_LABELS: Record<Role, string> = {
   admin: 'Administrator',
 };
 
+// ---------------------------------------------------------------------------------------------
+// Text: every text field of every request goes through textSchema.
+
+/**
+ * Lone UTF-16 surrogates (a high surrogate without its low half, or the reverse). With the `u`
+ * flag a regular expression reads a string by code points, so a well-formed pair is one code
+ * point above U+FFFF and does not match; only an unpaired half does.
+ */
+const LONE_SURROGATE = /[\uD800-\uDFFF]/u;
+
+/**
+ * The rule a text value breaks, or null: PostgreSQL text and jsonb cannot hold U+0000 (NUL),
+ * and a lone surrogate is not Unicode text at all (it cannot be encoded as UTF-8). Both are
+ * refused rather than altered, so what is stored is what was sent.
+ */
+export function textRuleError(value: string): string | null {
+  if (value.includes('\u0000')) return 'must not contain NUL characters (U+0000)';
+  if (LONE_SURROGATE.test(value)) return 'must not contain a lone UTF-16 surrogate (text that is not valid Unicode)';
+  return null;
+}
+
+/**
+ * The one string schema of request fields: a zod string that refuses NUL characters and lone
+ * surrogates with a 400 naming the field (see {@link textRuleError}). Chain `.trim()`,
+ * `.min()`, `.max()` as on `z.string()`.
+ *
+ * @example textSchema({ error: 'is required' }).trim().min(1, 'is required').max(120)
+ */
+export function textSchema(params?: Parameters<typeof z.string>[0]) {
+  return z.string(params).superRefine((value, ctx) => {
+    const message = textRuleError(value);
+    if (message) ctx.addIssue({ code: 'custom', message });
+  });
+}
+
+/**
+ * Every string (and object key) anywhere in a request part that breaks {@link textRuleError},
+ * named by its dotted path. `validate()` runs it over what the schemas let through, so a free
+ * form value (a checklist record, an unknown key) cannot carry one to the database either.
+ */
+export function textRuleErrorsDeep(value: unknown, prefix?: string): FieldError[] {
+  const errors: FieldError[] = [];
+  const seen = new Set<unknown>();
+  const walk = (v: unknown, path: string[]) => {
+    if (errors.length >= 20) return;
+    if (typeof v === 'string') {
+      const message = textRuleError(v);
+      if (message) errors.push({ field: [prefix, ...path].filter(Boolean).join('.') || '(body)', message });
+      return;
+    }
+    if (v === null || typeof v !== 'object' || seen.has(v)) return;
+    seen.add(v);
+    if (Array.isArray(v)) {
+      v.forEach((item, k) => walk(item, [...path, String(k)]));
+      return;
+    }
+    for (const [key, item] of Object.entries(v)) {
+      const keyMessage = textRuleError(key);
+      if (keyMessage) errors.push({ field: [prefix, ...path].filter(Boolean).join('.') || '(body)', message: `has a key that ${keyMessage}` });
+      else walk(item, [...path, key]);
+    }
+  };
+  walk(value, []);
+  return errors;
+}
+
+/** The largest id PostgreSQL's integer columns hold (2^31 − 1). */
+export const MAX_ID = 2_147_483_647;
+
 /** Record ids are positive integers; path parameters arrive as strings. */
-export const idSchema = z.coerce.number().int('must be a whole number').positive('must be a positive id');
+export const idSchema = z.coerce.number().int('must be a whole number').positive('must be a positive id').max(MAX_ID, `must be at most ${MAX_ID}`);
 export const idParamsSchema = z.object({ id: idSchema });
 
-export const emailSchema = z
-  .string({ error: 'is required' })
+export const emailSchema = textSchema({ error: 'is required' })
   .trim()
   .toLowerCase()
   .max(254, 'must be at most 254 characters')
   .pipe(z.email({ error: 'must be a valid e-mail address' }));
 
 export const PASSWORD_MIN_LENGTH = 10;
-export const passwordSchema = z
-  .string({ error: 'is required' })
+/**
+ * bcrypt reads only the first 72 bytes of a password (bcryptjs README: "The maximum input length
+ * is 72 bytes"; OpenBSD bcrypt(3) likewise), so two passwords that differ only after byte 72
+ * would both sign in. Longer ones are refused, counted in UTF-8 bytes.
+ */
+export const PASSWORD_MAX_BYTES = 72;
+const utf8Bytes = (value: string) => new TextEncoder().encode(value).length;
+const passwordTooLong = `must be at most ${PASSWORD_MAX_BYTES} bytes (${PASSWORD_MAX_BYTES} plain letters or digits; accented letters and symbols take 2–4 bytes each)`;
+/** A new password (sign-up, reset, invitation): 10 characters up to 72 bytes. */
+export const passwordSchema = textSchema({ error: 'is required' })
   .min(PASSWORD_MIN_LENGTH, `must be at least ${PASSWORD_MIN_LENGTH} characters`)
-  .max(200, 'must be at most 200 characters');
+  .refine((value) => utf8Bytes(value) <= PASSWORD_MAX_BYTES, { message: passwordTooLong });
+/** A password given to sign in: any non-empty text up to the same 72 bytes. */
+export const loginPasswordSchema = textSchema({ error: 'is required' })
+  .min(1, 'is required')
+  .refine((value) => utf8Bytes(value) <= PASSWORD_MAX_BYTES, { message: passwordTooLong });
 
 export const pagingQuerySchema = z.object({
-  page: z.coerce.number().int().min(1, 'must be 1 or more').default(1),
+  page: z.coerce.number().int().min(1, 'must be 1 or more').max(1_000_000, 'must be at most 1000000').default(1),
   pageSize: z.coerce.number().int().min(1, 'must be 1 or more').max(200, 'must be at most 200').default(50),
 });
 

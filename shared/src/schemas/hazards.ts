@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from './common';
 
 /**
  * Hazard data and computed hazard notes (DESIGN.md §4.5). The computations live in
@@ -26,10 +27,10 @@ export const ghsPictogramSchema = z.enum(GHS_PICTOGRAMS);
 /** One GHS classification entry of an ingredient: class, category, H-statements. */
 export const ghsClassificationSchema = z.object({
   /** Hazard class code, e.g. `ox-sol`, `acute-tox-oral`, `skin-corr`, `eye-dam`, `eye-irrit`, `water-react`, `flam-sol`. */
-  hazardClass: z.string().trim().min(1, 'is required').max(60),
+  hazardClass: textSchema().trim().min(1, 'is required').max(60),
   /** Category as printed, e.g. `1`, `1A`, `2`, `3`, `4`. */
-  category: z.string().trim().min(1, 'is required').max(8),
-  hStatements: z.array(z.string().regex(/^(EU)?H\d{3}[A-Za-z]*$/, 'must be an H-statement code such as H302')).max(20),
+  category: textSchema().trim().min(1, 'is required').max(8),
+  hStatements: z.array(textSchema().regex(/^(EU)?H\d{3}[A-Za-z]*$/, 'must be an H-statement code such as H302')).max(20),
 });
 export type GhsClassification = z.infer<typeof ghsClassificationSchema>;
 
@@ -49,9 +50,9 @@ export const ingredientHazardDataSchema = z.object({
   solutionPH: z.number().min(0).max(14).nullable().default(null),
   incompatibilityGroups: z.array(incompatibilityGroupSchema).max(6).default([]),
   /** Regulatory flags, e.g. `eu-2019-1148-an` (explosives precursor), `un-1942` (transport). */
-  regulatoryFlags: z.array(z.object({ code: z.string().min(1).max(60), text: z.string().min(1).max(500) })).max(20).default([]),
+  regulatoryFlags: z.array(z.object({ code: textSchema().min(1).max(60), text: textSchema().min(1).max(500) })).max(20).default([]),
   /** Where the data come from: a safety data sheet, a harmonised classification, or "from memory". */
-  source: z.string().trim().min(1, 'name the source of the hazard data').max(500),
+  source: textSchema().trim().min(1, 'name the source of the hazard data').max(500),
 });
 export type IngredientHazardData = z.infer<typeof ingredientHazardDataSchema>;
 

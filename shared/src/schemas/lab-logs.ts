@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema, MAX_ID } from './common';
 import { contactCaseSchema } from './briefs';
 
 /** Payloads of /api/lab-logs and /api/calibrations. */
@@ -26,8 +27,8 @@ export type LabConditions = z.infer<typeof labConditionsSchema>;
 
 export const labComponentSchema = z
   .object({
-    ingredientId: z.number().int().positive().optional(),
-    formula: z.string().trim().min(1).max(60).optional(),
+    ingredientId: z.number().int().positive().max(MAX_ID, `must be at most ${MAX_ID}`).optional(),
+    formula: textSchema().trim().min(1).max(60).optional(),
     massG: z.number().positive('must be greater than 0').max(100_000),
   })
   .refine((c) => (c.ingredientId === undefined) !== (c.formula === undefined), { message: 'give an ingredientId or a formula, not both' });
@@ -35,12 +36,12 @@ export const labComponentSchema = z
 /** The JSON in the `meta` field of the multipart upload. */
 export const createLabLogSchema = z
   .object({
-    name: z.string().trim().min(1, 'is required').max(120),
-    candidateId: z.number().int().positive().optional(),
+    name: textSchema().trim().min(1, 'is required').max(120),
+    candidateId: z.number().int().positive().max(MAX_ID, `must be at most ${MAX_ID}`).optional(),
     components: z.array(labComponentSchema).min(1).max(12).optional(),
     mapping: columnMappingSchema,
     conditions: labConditionsSchema,
-    notes: z.string().max(2000).optional(),
+    notes: textSchema().max(2000).optional(),
   })
   .refine((m) => (m.candidateId === undefined) !== (m.components === undefined), {
     message: 'give a candidateId or the mixture components, one of the two',
@@ -49,7 +50,7 @@ export const createLabLogSchema = z
 export type CreateLabLogRequest = z.infer<typeof createLabLogSchema>;
 
 export const labLogListQuerySchema = z.object({
-  candidateId: z.coerce.number().int().positive().optional(),
+  candidateId: z.coerce.number().int().positive().max(MAX_ID, `must be at most ${MAX_ID}`).optional(),
 });
 
 export const fitRequestSchema = z.object({
@@ -58,13 +59,13 @@ export const fitRequestSchema = z.object({
 
 export const applyCalibrationSchema = z
   .object({
-    labLogId: z.number({ error: 'is required' }).int().positive(),
+    labLogId: z.number({ error: 'is required' }).int().positive().max(MAX_ID, `must be at most ${MAX_ID}`),
     scope: z.enum(['contact', 'ingredient']),
     /** For scope contact: the case whose UA the fitted multiplier scales (default the log's). */
     contact: contactCaseSchema.optional(),
     /** For scope ingredient: the ingredient whose rate constant and enthalpy factor are set. */
-    ingredientId: z.number().int().positive().optional(),
-    note: z.string().max(500).optional(),
+    ingredientId: z.number().int().positive().max(MAX_ID, `must be at most ${MAX_ID}`).optional(),
+    note: textSchema().max(500).optional(),
   })
   .refine((b) => b.scope !== 'ingredient' || b.ingredientId !== undefined, { message: 'is required for an ingredient calibration', path: ['ingredientId'] });
 export type ApplyCalibrationRequest = z.infer<typeof applyCalibrationSchema>;

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { FormulaError, parseFormula } from '../chemistry/formula';
 import { ingredientProcessSchema } from '../thermal/process';
-import { pagingQuerySchema, type FieldError } from './common';
+import { pagingQuerySchema, type FieldError, textSchema, MAX_ID } from './common';
 
 // Species data and the ingredient library (DESIGN.md §3, §5).
 
@@ -9,15 +9,13 @@ export const PHASES = ['cr', 'l', 'g', 'aq', 'ai', 'ao'] as const;
 export const phaseSchema = z.enum(PHASES, { error: `must be one of ${PHASES.join(', ')}` });
 
 /** A species key `formula(phase)`, e.g. `NH4NO3(cr)`. */
-export const speciesKeySchema = z
-  .string({ error: 'must be a species key such as NH4NO3(cr)' })
+export const speciesKeySchema = textSchema({ error: 'must be a species key such as NH4NO3(cr)' })
   .trim()
   .max(120, 'must be at most 120 characters')
   .regex(/^.+\((cr|l|g|aq|ai|ao)\)$/, 'must be a species key such as NH4NO3(cr) (formula, then phase in brackets)');
 
 /** A formula the shared parser reads (hydrate dots, brackets, charges). */
-export const formulaSchema = z
-  .string({ error: 'is required' })
+export const formulaSchema = textSchema({ error: 'is required' })
   .trim()
   .min(1, 'is required')
   .max(100, 'must be at most 100 characters')
@@ -30,8 +28,7 @@ export const formulaSchema = z
   });
 
 /** Every change to species data names where the values come from. */
-export const citationSchema = z
-  .string({ error: 'is required: cite the source of these values' })
+export const citationSchema = textSchema({ error: 'is required: cite the source of these values' })
   .trim()
   .min(3, 'is required: cite the source of these values (at least 3 characters)')
   .max(500, 'must be at most 500 characters');
@@ -61,7 +58,7 @@ export const speciesSchema = z.object({
 export type Species = z.infer<typeof speciesSchema>;
 
 export const speciesListQuerySchema = pagingQuerySchema.extend({
-  q: z.string().trim().max(100, 'must be at most 100 characters').optional(),
+  q: textSchema().trim().max(100, 'must be at most 100 characters').optional(),
   phase: phaseSchema.optional(),
   scope: z.enum(['reference', 'workspace']).optional(),
 });
@@ -76,7 +73,7 @@ export const speciesListResponseSchema = z.object({
 export const createSpeciesRequestSchema = z.object({
   formula: formulaSchema,
   phase: phaseSchema,
-  name: z.string({ error: 'is required' }).trim().min(1, 'is required').max(200, 'must be at most 200 characters'),
+  name: textSchema({ error: 'is required' }).trim().min(1, 'is required').max(200, 'must be at most 200 characters'),
   dfH_kJ_per_mol: kJPerMol('dfH_kJ_per_mol').nullable().optional(),
   dfG_kJ_per_mol: kJPerMol('dfG_kJ_per_mol').nullable().optional(),
   S_J_per_mol_K: jPerMolK('S_J_per_mol_K').nullable().optional(),
@@ -92,14 +89,14 @@ export type CreateSpeciesRequest = z.infer<typeof createSpeciesRequestSchema>;
  * On a reference row this creates the workspace's correction; on a workspace row it edits it.
  */
 export const updateSpeciesRequestSchema = z.object({
-  name: z.string().trim().min(1, 'is required').max(200, 'must be at most 200 characters').optional(),
+  name: textSchema().trim().min(1, 'is required').max(200, 'must be at most 200 characters').optional(),
   dfH_kJ_per_mol: kJPerMol('dfH_kJ_per_mol').nullable().optional(),
   dfG_kJ_per_mol: kJPerMol('dfG_kJ_per_mol').nullable().optional(),
   S_J_per_mol_K: jPerMolK('S_J_per_mol_K').nullable().optional(),
   Cp_J_per_mol_K: jPerMolK('Cp_J_per_mol_K').nullable().optional(),
   molarMass_g_per_mol: z.number({ error: 'must be a number in g/mol' }).positive('must be greater than 0').max(100_000).optional(),
   source: citationSchema,
-  version: z.number({ error: 'is required' }).int().min(0),
+  version: z.number({ error: 'is required' }).int().min(0).max(MAX_ID, `must be at most ${MAX_ID}`),
 });
 export type UpdateSpeciesRequest = z.infer<typeof updateSpeciesRequestSchema>;
 
@@ -116,15 +113,13 @@ export type IngredientRole = z.infer<typeof ingredientRoleSchema>;
  */
 export const costPerKgSchema = z.preprocess(
   (v) => (typeof v === 'number' && Number.isFinite(v) ? String(v) : v),
-  z
-    .string({ error: 'must be a decimal number such as 12.50' })
+  textSchema({ error: 'must be a decimal number such as 12.50' })
     .trim()
     .refine((s) => !s.startsWith('-'), { message: 'must be 0 or more', abort: true })
     .regex(/^\d{1,8}(\.\d{1,4})?$/, 'must be a decimal number such as 12.50 (at most 8 digits before and 4 after the point)'),
 );
 
-export const currencySchema = z
-  .string({ error: 'must be a three-letter currency code such as EUR' })
+export const currencySchema = textSchema({ error: 'must be a three-letter currency code such as EUR' })
   .trim()
   .toUpperCase()
   .regex(/^[A-Z]{3}$/, 'must be a three-letter currency code such as EUR');
@@ -138,12 +133,12 @@ const gPerG = (what: string) => z.number({ error: `${what} must be a number in g
  */
 export const ingredientNeedSchema = z
   .object({
-    ingredientId: z.number({ error: 'must be the id of an ingredient of this library' }).int('must be a whole number').positive('must be a positive id'),
+    ingredientId: z.number({ error: 'must be the id of an ingredient of this library' }).int('must be a whole number').positive('must be a positive id').max(MAX_ID, `must be at most ${MAX_ID}`),
     minGPerG: gPerG('minGPerG'),
     /** Absent: no upper ratio. */
     maxGPerG: gPerG('maxGPerG').optional(),
     /** Why (citation or common practice). */
-    source: z.string({ error: 'must be text' }).trim().max(500, 'must be at most 500 characters').optional(),
+    source: textSchema({ error: 'must be text' }).trim().max(500, 'must be at most 500 characters').optional(),
   })
   .refine((n) => n.maxGPerG === undefined || n.maxGPerG >= n.minGPerG, { message: 'must be at least minGPerG', path: ['maxGPerG'] });
 export type IngredientNeed = z.infer<typeof ingredientNeedSchema>;
@@ -161,8 +156,8 @@ export const ingredientNeedsSchema = z
   });
 
 const ingredientFields = {
-  name: z.string({ error: 'is required' }).trim().min(1, 'is required').max(120, 'must be at most 120 characters'),
-  grade: z.string({ error: 'must be text' }).trim().max(120, 'must be at most 120 characters'),
+  name: textSchema({ error: 'is required' }).trim().min(1, 'is required').max(120, 'must be at most 120 characters'),
+  grade: textSchema({ error: 'must be text' }).trim().max(120, 'must be at most 120 characters'),
   role: ingredientRoleSchema,
   /** The species the ingredient is, when it is one (e.g. `NH4NO3(cr)`). */
   speciesKey: speciesKeySchema.nullable(),
@@ -175,8 +170,8 @@ const ingredientFields = {
   /** Specific heat capacity of an inert ingredient, J/(g·K). */
   cpJPerGK: z.number({ error: 'must be a number in J/(g·K)' }).positive('must be greater than 0').max(10, 'must be at most 10 J/(g·K)').nullable(),
   /** Citations (data sheets, handbooks) behind the figures. */
-  sources: z.array(z.string().trim().min(1, 'must not be empty').max(500, 'must be at most 500 characters')).max(20, 'at most 20 sources'),
-  notes: z.string({ error: 'must be text' }).max(4000, 'must be at most 4000 characters'),
+  sources: z.array(textSchema().trim().min(1, 'must not be empty').max(500, 'must be at most 500 characters')).max(20, 'at most 20 sources'),
+  notes: textSchema({ error: 'must be text' }).max(4000, 'must be at most 4000 characters'),
   /** Other ingredients of this library it needs beside it, g per g of it. */
   needs: ingredientNeedsSchema,
 };
@@ -241,7 +236,7 @@ export const updateIngredientRequestSchema = z
     sources: ingredientFields.sources.optional(),
     notes: ingredientFields.notes.optional(),
     needs: ingredientFields.needs.optional(),
-    version: z.number({ error: 'is required' }).int().min(0),
+    version: z.number({ error: 'is required' }).int().min(0).max(MAX_ID, `must be at most ${MAX_ID}`),
   });
 export type UpdateIngredientRequest = z.infer<typeof updateIngredientRequestSchema>;
 
@@ -270,7 +265,7 @@ export type Ingredient = z.infer<typeof ingredientSchema>;
 
 export const INGREDIENT_SORTS = ['name', '-name', 'costPerKg', '-costPerKg', 'role', '-role', 'updatedAt', '-updatedAt'] as const;
 export const ingredientListQuerySchema = pagingQuerySchema.extend({
-  q: z.string().trim().max(100, 'must be at most 100 characters').optional(),
+  q: textSchema().trim().max(100, 'must be at most 100 characters').optional(),
   role: ingredientRoleSchema.optional(),
   sort: z.enum(INGREDIENT_SORTS, { error: `must be one of ${INGREDIENT_SORTS.join(', ')}` }).default('name'),
 });
@@ -284,7 +279,7 @@ export const ingredientListResponseSchema = z.object({
 
 export const deleteIngredientQuerySchema = z.object({
   /** When given, the delete is refused (409) if the ingredient changed since this version. */
-  version: z.coerce.number().int().min(0).optional(),
+  version: z.coerce.number().int().min(0).max(MAX_ID, `must be at most ${MAX_ID}`).optional(),
 });
 
 export const auditEventSchema = z.object({
@@ -341,4 +336,4 @@ export const attachmentSchema = z.object({
 });
 export type Attachment = z.infer<typeof attachmentSchema>;
 export const attachmentListResponseSchema = z.object({ attachments: z.array(attachmentSchema) });
-export const ingredientAttachmentParamsSchema = z.object({ id: z.coerce.number().int('must be a whole number').positive('must be a positive id') });
+export const ingredientAttachmentParamsSchema = z.object({ id: z.coerce.number().int('must be a whole number').positive('must be a positive id').max(MAX_ID, `must be at most ${MAX_ID}`) });

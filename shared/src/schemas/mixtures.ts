@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { contactSchema } from '../thermal/contact';
 import { ingredientProcessSchema } from '../thermal/process';
 import { loadSchema } from './briefs';
-import { idSchema } from './common';
+import { idSchema, textSchema } from './common';
 
 /**
  * Payloads of POST /api/mixtures/evaluate (DESIGN.md §5). The request names ingredients by id
@@ -37,7 +37,7 @@ const oneExchangeMessage = { message: 'give either contact or uaWPerK (exactly o
 export const mixtureComponentRequestSchema = z
   .object({
     ingredientId: idSchema.optional(),
-    formula: z.string().trim().min(1).optional(),
+    formula: textSchema().trim().min(1).optional(),
     massG: z.number().min(0, 'massG must be 0 or more').max(1e5),
   })
   .refine((c) => (c.ingredientId === undefined) !== (c.formula === undefined), {

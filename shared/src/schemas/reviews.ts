@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema, MAX_ID } from './common';
 import { REVIEW_STAGES, REVIEW_STATES, REVIEW_VERDICTS } from '../reviews/state-machine';
 import { candidateHazardsSchema, ingredientHazardDataSchema, labelElementsSchema, hazardNoteSchema } from './hazards';
 import { candidateRecordSchema } from './runs';
@@ -10,7 +11,7 @@ export const reviewVerdictSchema = z.enum(REVIEW_VERDICTS, { error: 'must be app
 /** A lab log attached to the candidate, or waived with the reason. */
 export const labLogChecklistSchema = z.union([
   z.object({ attached: z.boolean({ error: 'must be true or false' }) }).strict(),
-  z.object({ waivedReason: z.string().trim().max(1000) }).strict(),
+  z.object({ waivedReason: textSchema().trim().max(1000) }).strict(),
 ]);
 
 export const chemistryChecklistSchema = z.object({
@@ -49,8 +50,8 @@ export const reviewDecisionRequestSchema = z
   .object({
     stage: reviewStageSchema,
     verdict: reviewVerdictSchema,
-    checklist: z.record(z.string(), z.unknown()).default({}),
-    comment: z.string().trim().max(4000, 'must be at most 4000 characters').default(''),
+    checklist: z.record(textSchema(), z.unknown()).default({}),
+    comment: textSchema().trim().max(4000, 'must be at most 4000 characters').default(''),
   })
   .transform((body, ctx) => {
     const schema = body.stage === 'chemistry' ? chemistryChecklistSchema : regulatoryChecklistSchema;
@@ -130,14 +131,14 @@ export type ReviewStatus = z.infer<typeof reviewStatusSchema>;
 export const reviewHistoryResponseSchema = z.object({ status: reviewStatusSchema, reviews: z.array(reviewRecordSchema), events: z.array(reviewEventSchema) });
 export type ReviewHistoryResponse = z.infer<typeof reviewHistoryResponseSchema>;
 
-export const submitRequestSchema = z.object({ comment: z.string().trim().max(4000).default('') });
+export const submitRequestSchema = z.object({ comment: textSchema().trim().max(4000).default('') });
 
 export const reviseRequestSchema = z.object({
   composition: z
-    .array(z.object({ ingredientId: z.coerce.number().int('must be a whole number').positive('must be a positive id'), massG: z.number({ error: 'must be a number of grams' }).min(0, 'must be 0 g or more').max(1e5) }))
+    .array(z.object({ ingredientId: z.coerce.number().int('must be a whole number').positive('must be a positive id').max(MAX_ID, `must be at most ${MAX_ID}`), massG: z.number({ error: 'must be a number of grams' }).min(0, 'must be 0 g or more').max(1e5) }))
     .min(1, 'give at least one ingredient')
     .max(30),
-  comment: z.string().trim().max(4000).default(''),
+  comment: textSchema().trim().max(4000).default(''),
 });
 export type ReviseRequest = z.input<typeof reviseRequestSchema>;
 
@@ -167,7 +168,7 @@ export type IngredientHazardsResponse = z.infer<typeof ingredientHazardsResponse
 
 export const updateIngredientHazardsRequestSchema = z.object({
   hazardData: ingredientHazardDataSchema.nullable(),
-  version: z.number({ error: 'is required: the hazard version you loaded' }).int().min(0),
+  version: z.number({ error: 'is required: the hazard version you loaded' }).int().min(0).max(MAX_ID, `must be at most ${MAX_ID}`),
 });
 export type UpdateIngredientHazardsRequest = z.input<typeof updateIngredientHazardsRequestSchema>;
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { MAX_ID } from './common';
 import { briefSchema, candidateSchema, infeasibleSetSchema } from './briefs';
 
 /**
@@ -79,7 +80,7 @@ export type RunDetail = z.infer<typeof runDetailSchema>;
 export const runListResponseSchema = z.object({ runs: z.array(runSummarySchema) });
 export const createRunResponseSchema = z.object({ runId: z.number() });
 export const candidateResponseSchema = z.object({ candidate: candidateRecordSchema, currency: z.string(), brief: briefSpecSchema });
-export const briefIdParamsSchema = z.object({ id: z.coerce.number().int('must be a whole number').positive('must be a positive id') });
+export const briefIdParamsSchema = z.object({ id: z.coerce.number().int('must be a whole number').positive('must be a positive id').max(MAX_ID, `must be at most ${MAX_ID}`) });
 
 /** GET /api/candidates/:id/curve: the candidate's curve under its brief, as its run's data and calibrations give it. */
 export const candidateCurveSchema = z.object({

@@ -1,11 +1,12 @@
 import { z } from 'zod';
+import { textSchema } from './common';
 import { phaseSchema } from './library';
 import { evaluateMixtureResponseSchema } from './mixtures';
 
 // Thermochemistry API: reaction thermodynamics and the chemistry library for instant previews.
 
 export const reactionTermSchema = z.object({
-  formula: z.string({ error: 'is required' }).trim().min(1, 'is required').max(100, 'must be at most 100 characters'),
+  formula: textSchema({ error: 'is required' }).trim().min(1, 'is required').max(100, 'must be at most 100 characters'),
   phase: phaseSchema.optional(),
   coef: z.number({ error: 'must be a number' }).positive('must be greater than 0').max(1000, 'must be at most 1000'),
 });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { emailSchema, passwordSchema, roleSchema } from './common';
+import { emailSchema, passwordSchema, roleSchema, textSchema, MAX_ID } from './common';
 
 export const userSchema = z.object({
   id: z.number(),
@@ -19,7 +19,7 @@ export const updateUserRequestSchema = z
   .object({
     role: roleSchema.optional(),
     disabled: z.boolean({ error: 'must be true or false' }).optional(),
-    version: z.number({ error: 'is required' }).int().min(0),
+    version: z.number({ error: 'is required' }).int().min(0).max(MAX_ID, `must be at most ${MAX_ID}`),
   })
   .refine((body) => body.role !== undefined || body.disabled !== undefined, {
     message: 'give a role or disabled to change',
@@ -45,13 +45,13 @@ export const invitationListResponseSchema = z.object({ invitations: z.array(invi
 
 export const createInvitationRequestSchema = z.object({
   email: emailSchema,
-  name: z.string({ error: 'is required' }).trim().min(1, 'is required').max(120, 'must be at most 120 characters'),
+  name: textSchema({ error: 'is required' }).trim().min(1, 'is required').max(120, 'must be at most 120 characters'),
   role: roleSchema,
 });
 export type CreateInvitationRequest = z.infer<typeof createInvitationRequestSchema>;
 
 export const invitationTokenQuerySchema = z.object({
-  token: z.string({ error: 'is required' }).min(20, 'is not a valid invitation token').max(200, 'is not a valid invitation token'),
+  token: textSchema({ error: 'is required' }).min(20, 'is not a valid invitation token').max(200, 'is not a valid invitation token'),
 });
 export const invitationLookupResponseSchema = z.object({
   email: z.string(),
@@ -60,8 +60,8 @@ export const invitationLookupResponseSchema = z.object({
   workspaceName: z.string(),
 });
 export const acceptInvitationRequestSchema = z.object({
-  token: z.string({ error: 'is required' }).min(20, 'is not a valid invitation token').max(200, 'is not a valid invitation token'),
-  name: z.string({ error: 'is required' }).trim().min(1, 'is required').max(120, 'must be at most 120 characters'),
+  token: textSchema({ error: 'is required' }).min(20, 'is not a valid invitation token').max(200, 'is not a valid invitation token'),
+  name: textSchema({ error: 'is required' }).trim().min(1, 'is required').max(120, 'must be at most 120 characters'),
   password: passwordSchema,
 });
 export type AcceptInvitationRequest = z.infer<typeof acceptInvitationRequestSchema>;

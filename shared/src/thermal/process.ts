@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from '../schemas/common';
 import {
   DEFAULT_CRYSTALLISATION_DRIVING_K,
   DEFAULT_CRYSTALLISATION_RATE_PER_MIN,
@@ -21,9 +22,9 @@ import {
  */
 
 /** A species key `formula(phase)`, e.g. `NH4NO3(cr)`, `H2O(l)`, `O2(g)`. */
-const speciesKeySchema = z
-  .string()
+const speciesKeySchema = textSchema()
   .trim()
+  .max(120, 'must be at most 120 characters')
   .regex(/^.+\((cr|l|g|aq|ai|ao)\)$/, 'must be a species key such as NH4NO3(cr) (formula, then phase in brackets)');
 
 const positive = (what: string) => z.number({ error: `${what} must be a number` }).positive(`${what} must be greater than 0`);
@@ -32,7 +33,7 @@ const nonNegative = (what: string) => z.number({ error: `${what} must be a numbe
 export const eutecticSchema = z.object({
   tempC: z.number().max(0, 'a salt–water eutectic lies at or below 0 °C'),
   soluteMassFraction: z.number().gt(0).lt(1),
-  source: z.string().min(1, 'name the source of the eutectic'),
+  source: textSchema().min(1, 'name the source of the eutectic').max(1000, 'must be at most 1000 characters'),
 });
 
 /** Dissolution of a solid (anhydrous salt or hydrate) in the pack's water. */
@@ -47,7 +48,7 @@ export const dissolutionProcessSchema = z.object({
   /** Ions (or particles) per formula unit in solution, for the freezing-point estimate: 2 for NH4NO3, 1 for urea. */
   ionsPerFormulaUnit: z.number().int().min(1).max(6).default(2),
   rateConstantPerMin: positive('rateConstantPerMin').default(DEFAULT_DISSOLUTION_RATE_PER_MIN),
-  rateConstantSource: z.string().min(1).default(DEFAULT_DISSOLUTION_RATE_SOURCE),
+  rateConstantSource: textSchema().min(1).max(1000, 'must be at most 1000 characters').default(DEFAULT_DISSOLUTION_RATE_SOURCE),
   /** Specific heat capacity of the undissolved solid, J/(g·K); default from the species Cp°. */
   solidCp_J_per_gK: positive('solidCp_J_per_gK').optional(),
   /** Salt–water eutectic; when absent the chemistry data are asked, then a colligative estimate is used. */
@@ -77,9 +78,9 @@ export const reactionProcessSchema = z.object({
   basis: z.enum(['limiting', 'premix']).default('limiting'),
   /** ΔrH per mol of reaction as written, kJ; default from the species data by Hess's law. */
   dH_kJ_per_mol: z.number().optional(),
-  dHSource: z.string().optional(),
+  dHSource: textSchema().max(1000, 'must be at most 1000 characters').optional(),
   rateConstantPerMin: positive('rateConstantPerMin').default(DEFAULT_REACTION_RATE_PER_MIN),
-  rateConstantSource: z.string().min(1).default(DEFAULT_REACTION_RATE_SOURCE),
+  rateConstantSource: textSchema().min(1).max(1000, 'must be at most 1000 characters').default(DEFAULT_REACTION_RATE_SOURCE),
 });
 
 /** Crystallisation of a supercooled melt (sodium acetate trihydrate); plateau at the melting point. */
@@ -87,7 +88,7 @@ export const crystallisationProcessSchema = z.object({
   kind: z.literal('crystallisation'),
   meltingPointC: z.number().default(SAT_MELTING_POINT_C),
   latentHeat_J_per_g: positive('latentHeat_J_per_g').default(SAT_LATENT_HEAT_J_PER_G),
-  latentHeatSource: z.string().min(1).default(SAT_LATENT_HEAT_SOURCE),
+  latentHeatSource: textSchema().min(1).max(1000, 'must be at most 1000 characters').default(SAT_LATENT_HEAT_SOURCE),
   liquidCp_J_per_gK: positive('liquidCp_J_per_gK').default(SAT_LIQUID_CP_J_PER_GK),
   solidCp_J_per_gK: positive('solidCp_J_per_gK').default(SAT_SOLID_CP_J_PER_GK),
   rateConstantPerMin: positive('rateConstantPerMin').default(DEFAULT_CRYSTALLISATION_RATE_PER_MIN),
@@ -124,7 +125,7 @@ export const inertProcessSchema = z.object({
   role: z.enum(['water', 'additive', 'packaging']),
   /** J/(g·K); default by role (water: solution model; others: constants.INERT_CP_J_PER_GK). */
   cp_J_per_gK: positive('cp_J_per_gK').optional(),
-  cpSource: z.string().optional(),
+  cpSource: textSchema().max(1000, 'must be at most 1000 characters').optional(),
 });
 
 export const ingredientProcessSchema = z.discriminatedUnion('kind', [
