@@ -17,12 +17,12 @@ invitationsRouter.get('/lookup', validate({ query: invitationTokenQuerySchema })
   res.json(await lookupInvitation(query.token));
 });
 
-invitationsRouter.post('/accept', validate({ body: acceptInvitationRequestSchema }), async (_req, res) => {
+invitationsRouter.post('/accept', validate({ body: acceptInvitationRequestSchema }), async (req, res) => {
   const { body } = validated(res, { body: acceptInvitationRequestSchema });
   const userId = await acceptInvitation(body);
   const user = await UserRecord.findByPk(userId, { include: [{ model: Workspace, as: 'workspace' }] });
   const token = issueSessionToken(user!);
-  setSessionCookie(res, token);
+  setSessionCookie(req, res, token);
   res.status(201).json({ user: toSessionUser(toAuthUser(user!)), token });
 });
 
