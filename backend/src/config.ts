@@ -31,6 +31,8 @@ const envSchema = z.object({
   SMTP_PASS: z.string().optional(),
   MAIL_FROM: z.string().default('Packwright <no-reply@packwright.test>'),
   MAIL_SINK_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+  MAIL_QUEUE: z.string().regex(/^[\w.-]{1,60}$/, 'MAIL_QUEUE must be letters, digits, . _ or -').default('mail'),
+  MAIL_RETRY_LIMIT: z.coerce.number().int().min(0).max(20).default(5),
   LOGIN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
   LOGIN_CLIENT_RATE_LIMIT: z.coerce.number().int().positive().default(30),
   TRUST_PROXY: trustProxySchema,
@@ -83,6 +85,9 @@ function loadConfig() {
       /** The local sink runs whenever no real SMTP server is configured and we are not in production. */
       sinkEnabled: !smtpConfigured && env.NODE_ENV !== 'production',
       sinkPort: env.MAIL_SINK_PORT,
+      /** pg-boss queue of mail sent in the background (password-reset links), and its retries. */
+      queueName: env.MAIL_QUEUE,
+      retryLimit: env.MAIL_RETRY_LIMIT,
     },
     /** Failed sign-ins allowed per address and per client within the window (auth/login-limiter.ts). */
     loginRateLimit: { perAddress: env.LOGIN_RATE_LIMIT, perClient: env.LOGIN_CLIENT_RATE_LIMIT, windowMs: env.LOGIN_RATE_WINDOW_MS },
