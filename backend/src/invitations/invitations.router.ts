@@ -32,7 +32,7 @@ invitationsRouter.get('/', requireAuth, requireRole('admin'), async (req, res) =
 
 invitationsRouter.post('/', requireAuth, requireRole('admin'), validate({ body: createInvitationRequestSchema }), async (req, res) => {
   const { body } = validated(res, { body: createInvitationRequestSchema });
-  res.status(201).json({ invitation: await createInvitation(req.user!, body) });
+  res.status(201).json(await createInvitation(req.user!, body));
 });
 
 invitationsRouter.delete('/:id', requireAuth, requireRole('admin'), validate({ params: idParamsSchema }), async (req, res) => {
