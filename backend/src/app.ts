@@ -3,7 +3,8 @@ import path from 'node:path';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import cookieParser from 'cookie-parser';
-import { projectRoot, config } from './config';
+import { projectRoot, config, type TrustProxy } from './config';
+import { LoginLimiter, type LoginLimits } from './auth/login-limiter';
 import { passport } from './auth/passport';
 import { sameOriginGuard } from './auth/auth.middleware';
 import { apiNotFound, errorHandler } from './http/error-handler';
@@ -14,13 +15,20 @@ export interface AppOptions {
   staticDir?: string | null;
   /** Extra origins allowed to make cookie-authenticated writes (the Vite dev server). */
   extraOrigins?: string[];
+  /** Express's `trust proxy` (default: the TRUST_PROXY setting, off when unset). */
+  trustProxy?: TrustProxy;
+  /** Sign-in limits of this app (default: the LOGIN_* settings). */
+  loginLimits?: LoginLimits;
 }
 
 /** Builds the Express app: security headers, JSON limits, the API under /api, the built SPA. */
 export function createApp(options: AppOptions = {}): Express {
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-For/-Proto are believed only from the proxies named by TRUST_PROXY: otherwise any
+  // client could pick its own address (and escape the sign-in limit) or claim https.
+  app.set('trust proxy', options.trustProxy ?? config.trustProxy);
+  app.locals.loginLimiter = new LoginLimiter(options.loginLimits ?? config.loginRateLimit);
   app.use(
     helmet({
       contentSecurityPolicy: {

@@ -6,6 +6,16 @@ import { z } from 'zod';
 /** The project root (two levels above backend/src). */
 export const projectRoot = path.resolve(import.meta.dirname, '..', '..');
 
+/** TRUST_PROXY: which proxies' X-Forwarded-For/-Proto to believe (Express's `trust proxy`). */
+export const trustProxySchema = z
+  .string()
+  .trim()
+  .regex(
+    /^(|true|false|\d{1,2}|((loopback|linklocal|uniquelocal|[0-9a-fA-F.:]+(\/\d{1,3})?)(\s*,\s*(loopback|linklocal|uniquelocal|[0-9a-fA-F.:]+(\/\d{1,3})?))*))$/,
+    'TRUST_PROXY must be false, true, a hop count, or a comma-separated list of proxy addresses/subnets (loopback, linklocal, uniquelocal, 10.0.0.1, 10.0.0.0/8, ::1)',
+  )
+  .default('');
+
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
   HOST: z.string().default('127.0.0.1'),
@@ -21,7 +31,11 @@ const envSchema = z.object({
   SMTP_PASS: z.string().optional(),
   MAIL_FROM: z.string().default('Packwright <no-reply@packwright.test>'),
   MAIL_SINK_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+  MAIL_QUEUE: z.string().regex(/^[\w.-]{1,60}$/, 'MAIL_QUEUE must be letters, digits, . _ or -').default('mail'),
+  MAIL_RETRY_LIMIT: z.coerce.number().int().min(0).max(20).default(5),
   LOGIN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
+  LOGIN_CLIENT_RATE_LIMIT: z.coerce.number().int().positive().default(30),
+  TRUST_PROXY: trustProxySchema,
   LOGIN_RATE_WINDOW_MS: z.coerce.number().int().positive().default(15 * 60 * 1000),
   WORKER_ENABLED: z.enum(['true', 'false']).default('true'),
   RUN_EXPIRE_SECONDS: z.coerce.number().int().min(1).default(600),
@@ -71,8 +85,14 @@ function loadConfig() {
       /** The local sink runs whenever no real SMTP server is configured and we are not in production. */
       sinkEnabled: !smtpConfigured && env.NODE_ENV !== 'production',
       sinkPort: env.MAIL_SINK_PORT,
+      /** pg-boss queue of mail sent in the background (password-reset links), and its retries. */
+      queueName: env.MAIL_QUEUE,
+      retryLimit: env.MAIL_RETRY_LIMIT,
     },
-    loginRateLimit: { limit: env.LOGIN_RATE_LIMIT, windowMs: env.LOGIN_RATE_WINDOW_MS },
+    /** Failed sign-ins allowed per address and per client within the window (auth/login-limiter.ts). */
+    loginRateLimit: { perAddress: env.LOGIN_RATE_LIMIT, perClient: env.LOGIN_CLIENT_RATE_LIMIT, windowMs: env.LOGIN_RATE_WINDOW_MS },
+    /** Express's `trust proxy`: off unless configured, so X-Forwarded-* from any client is ignored. */
+    trustProxy: parseTrustProxy(env.TRUST_PROXY),
     workerEnabled: env.WORKER_ENABLED === 'true',
     runs: {
       /** A job not finished in this time is taken as lost (its worker died) and retried. */
@@ -84,6 +104,18 @@ function loadConfig() {
       queueName: env.RUN_QUEUE,
     },
   };
+}
+
+export type TrustProxy = boolean | number | string;
+
+export function parseTrustProxy(value: string): TrustProxy {
+  if (value === '' || value === 'false') return false;
+  if (value === 'true') return true;
+  if (/^\d+$/.test(value)) return Number(value);
+  return value
+    .split(',')
+    .map((v) => v.trim())
+    .join(',');
 }
 
 function readOrCreateSecret(file: string): string {

@@ -8,6 +8,7 @@ import { seedDemo } from './db/seed';
 import { sequelize } from './db/sequelize';
 import { closeMailer, useMailSink } from './mail/mailer';
 import { startMailSink, type MailSink } from './mail/mail-sink';
+import { startMailWorker } from './mail/mail-queue';
 import { executeRun } from './runs/run-executor';
 import { startRunWorker, stopRunQueue } from './runs/run-queue';
 
@@ -43,7 +44,10 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
 
   if (options.worker ?? config.workerEnabled) await startRunWorker(({ runId }) => executeRun(runId));
 
+  // The app builds its routes (and registers their mail jobs) before the mail worker starts.
   const app = createApp(options);
+  // Background mail (password-reset links) is always served by the app process.
+  await startMailWorker();
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(options.port ?? config.port, config.host, () => resolve(s));
     s.once('error', reject);

@@ -1,9 +1,9 @@
-import { Router } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { Router, type Request } from 'express';
+import { rateLimit } from 'express-rate-limit';
 import { loginRequestSchema, passwordResetConfirmSchema, passwordResetRequestSchema } from '@shared/schemas';
-import { config } from '../config';
 import { AppError } from '../http/errors';
 import { validate, validated } from '../http/validate';
+import { LoginLimiter } from './login-limiter';
 import { passport } from './passport';
 import { requireAuth } from './auth.middleware';
 import { confirmPasswordReset, PASSWORD_RESET_ANSWER, recordLogin, requestPasswordReset } from './auth.service';
@@ -11,40 +11,44 @@ import { clearSessionCookie, issueSessionToken, setSessionCookie } from './sessi
 import { toSessionUser } from './session-user';
 import './auth.openapi';
 
-/** Counted per client address and e-mail address, so one person's typos do not lock out an office. */
-const loginLimiter = rateLimit({
-  windowMs: config.loginRateLimit.windowMs,
-  limit: config.loginRateLimit.limit,
-  standardHeaders: 'draft-8',
-  legacyHeaders: false,
-  keyGenerator: (req) => {
-    const email = typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase() : '';
-    return `${ipKeyGenerator(req.ip ?? '')}|${email}`;
-  },
-  handler: (_req, _res, next) =>
-    next(new AppError({ status: 429, code: 'too_many_attempts', message: 'Too many sign-in attempts. Wait a few minutes and try again.' })),
-});
-
 const resetLimiter = rateLimit({
   windowMs: 15 * 60 * 1000,
   limit: 20,
   standardHeaders: 'draft-8',
   legacyHeaders: false,
-  handler: (_req, _res, next) =>
-    next(new AppError({ status: 429, code: 'too_many_attempts', message: 'Too many reset requests. Wait a few minutes and try again.' })),
+  // req.ip follows TRUST_PROXY; a forwarded header from an untrusted client is simply ignored.
+  validate: { xForwardedForHeader: false },
+  handler: (req, _res, next) => {
+    const resetTime = (req as typeof req & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
+    const seconds = resetTime ? (resetTime.getTime() - Date.now()) / 1000 : 15 * 60;
+    next(AppError.tooManyAttempts('Too many reset requests from here.', seconds));
+  },
 });
+
+function loginLimiterOf(req: Request): LoginLimiter {
+  return req.app.locals.loginLimiter as LoginLimiter;
+}
 
 export const authRouter = Router();
 
-authRouter.post('/login', loginLimiter, validate({ body: loginRequestSchema }), (req, res, next) => {
+// Failed sign-ins are limited per address and per client (auth/login-limiter.ts); a successful
+// sign-in does not count. Bad input is answered 400 before the limit and does not count either.
+authRouter.post('/login', validate({ body: loginRequestSchema }), (req, res, next) => {
+  const { body } = validated(res, { body: loginRequestSchema });
+  const attempt = loginLimiterOf(req).begin(body.email, req.ip);
+  if (!attempt.allowed) return next(AppError.tooManyAttempts('Too many failed sign-in attempts for this address or from this network.', attempt.retryAfterSeconds));
   passport.authenticate('local', { session: false }, async (err: unknown, user: Express.User | false) => {
     try {
-      if (err) return next(err);
-      // One answer for an unknown address, a wrong password and a disabled account.
+      if (err) {
+        attempt.abandoned();
+        return next(err);
+      }
+      // One answer for an unknown address, a wrong password and a disabled account; it counts as a failure.
       if (!user) throw new AppError({ status: 401, code: 'invalid_credentials', message: 'That e-mail and password do not match an active account.' });
+      attempt.succeeded();
       const record = await recordLogin(user.id);
       const token = issueSessionToken(record);
-      setSessionCookie(res, token);
+      setSessionCookie(req, res, token);
       res.json({ user: toSessionUser(user), token });
     } catch (error) {
       next(error);
@@ -52,8 +56,8 @@ authRouter.post('/login', loginLimiter, validate({ body: loginRequestSchema }), 
   })(req, res, next);
 });
 
-authRouter.post('/logout', requireAuth, (_req, res) => {
-  clearSessionCookie(res);
+authRouter.post('/logout', requireAuth, (req, res) => {
+  clearSessionCookie(req, res);
   res.status(204).end();
 });
 

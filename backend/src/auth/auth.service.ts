@@ -4,6 +4,7 @@ import { appUrl } from '../app-url';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
 import { sendMail } from '../mail/mailer';
+import { enqueueMailJob, registerMailJob } from '../mail/mail-queue';
 import { linkMail } from '../mail/templates';
 import { UserRecord } from '../users/user.model';
 import { recordAudit } from '../audit/audit.service';
@@ -21,38 +22,62 @@ export async function recordLogin(userId: number): Promise<UserRecord> {
   return user;
 }
 
-/** Starts a reset: the answer never reveals whether the address exists. */
+const PASSWORD_RESET_JOB = 'password-reset';
+
+/**
+ * Starts a reset. The answer never reveals whether the address exists: for every address the
+ * request does the same work — one job put on the mail queue — and answers at once; the lookup,
+ * the link and the send happen in the background (a send that fails is retried).
+ */
 export async function requestPasswordReset(email: string): Promise<void> {
-  const user = await UserRecord.findOne({ where: { email } });
+  try {
+    await enqueueMailJob(PASSWORD_RESET_JOB, { email });
+  } catch (error) {
+    console.error('[mail] password reset could not be queued:', error);
+    throw new AppError({ status: 503, code: 'mail_unavailable', message: 'Password reset is unavailable right now. Try again in a few moments.' });
+  }
+}
+
+/**
+ * The background half of a reset: for an active account, revoke the links still pending (a new
+ * request makes older links void), store the new link's hash, and send the mail. Throwing fails
+ * the job, and the queue tries again with a fresh link.
+ */
+export async function deliverPasswordReset(email: string): Promise<void> {
+  const user = await UserRecord.findOne({ where: { email: email.trim().toLowerCase() } });
   if (!user || user.disabled) return;
   const { token, tokenHash } = newOneTimeToken();
-  await PasswordResetTokenRecord.create({
-    userId: user.id,
-    tokenHash,
-    expiresAt: new Date(Date.now() + PASSWORD_RESET_VALID_HOURS * 3600_000),
+  await sequelize.transaction(async (transaction) => {
+    await PasswordResetTokenRecord.update(
+      { revokedAt: new Date() },
+      { where: { userId: user.id, usedAt: null, revokedAt: null }, transaction },
+    );
+    await PasswordResetTokenRecord.create(
+      { userId: user.id, tokenHash, expiresAt: new Date(Date.now() + PASSWORD_RESET_VALID_HOURS * 3600_000) },
+      { transaction },
+    );
   });
   const link = appUrl(`/reset-password?token=${encodeURIComponent(token)}`);
   const body = linkMail({
     greeting: `Hello ${user.name},`,
-    lines: ['Someone asked to reset the password of your Packwright account. If it was you, choose a new password within 1 hour.'],
+    lines: ['Someone asked to reset the password of your Packwright account. If it was you, choose a new password within 1 hour. Only the newest link you were sent works.'],
     linkLabel: 'Choose a new password',
     link,
     footer: 'If you did not ask for this, ignore this message; your password stays as it is.',
   });
-  try {
-    await sendMail({ to: user.email, subject: 'Reset your Packwright password', ...body, workspaceId: user.workspaceId });
-  } catch (error) {
-    // The caller gets the same answer either way; a failed send must not reveal the account.
-    console.error('[mail] password reset e-mail could not be sent:', error);
-  }
+  await sendMail({ to: user.email, subject: 'Reset your Packwright password', ...body, workspaceId: user.workspaceId });
 }
 
-/** Spends a reset token and sets the password; older sessions stop working. */
+registerMailJob(PASSWORD_RESET_JOB, async (payload) => {
+  if (typeof payload.email === 'string') await deliverPasswordReset(payload.email);
+});
+
+/** Spends a reset token and sets the password; older sessions and the user's other reset links stop working. */
 export async function confirmPasswordReset(token: string, password: string): Promise<void> {
   const passwordHash = await hashPassword(password);
   await sequelize.transaction(async (transaction) => {
     const record = await PasswordResetTokenRecord.findOne({
-      where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
+      where: { tokenHash: hashToken(token), usedAt: null, revokedAt: null, expiresAt: { [Op.gt]: new Date() } },
       transaction,
       lock: transaction.LOCK.UPDATE,
     });
@@ -64,7 +89,11 @@ export async function confirmPasswordReset(token: string, password: string): Pro
       throw new AppError({ status: 400, code: 'invalid_token', message: 'This reset link is invalid, already used or expired. Ask for a new one.' });
     }
     await record.update({ usedAt: new Date() }, { transaction });
+    const [revoked] = await PasswordResetTokenRecord.update(
+      { revokedAt: new Date() },
+      { where: { userId: user.id, usedAt: null, revokedAt: null, id: { [Op.ne]: record.id } }, transaction },
+    );
     await user.update({ passwordHash, tokenVersion: user.tokenVersion + 1 }, { transaction });
-    await recordAudit({ workspaceId: user.workspaceId, actorId: user.id, action: 'user.password_reset', entityType: 'user', entityId: user.id }, transaction);
+    await recordAudit({ workspaceId: user.workspaceId, actorId: user.id, action: 'user.password_reset', entityType: 'user', entityId: user.id, detail: { otherLinksRevoked: revoked } }, transaction);
   });
 }

@@ -8,6 +8,8 @@ export class PasswordResetTokenRecord extends Model<InferAttributes<PasswordRese
   declare tokenHash: string;
   declare expiresAt: Date;
   declare usedAt: CreationOptional<Date | null>;
+  /** Set when a newer request or a successful reset made this link void. */
+  declare revokedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -18,6 +20,7 @@ PasswordResetTokenRecord.init(
     tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
     expiresAt: { type: DataTypes.DATE, allowNull: false },
     usedAt: { type: DataTypes.DATE, allowNull: true },
+    revokedAt: { type: DataTypes.DATE, allowNull: true },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

@@ -1,5 +1,5 @@
 import jwt from 'jsonwebtoken';
-import type { Response } from 'express';
+import type { Request, Response } from 'express';
 import { config } from '../config';
 import { SESSION_COOKIE, type SessionTokenPayload } from './passport';
 
@@ -8,16 +8,25 @@ export function issueSessionToken(user: { id: number; workspaceId: number; token
   return jwt.sign(payload, config.jwtSecret, { algorithm: 'HS256', expiresIn: config.jwtTtlSeconds, issuer: 'packwright' });
 }
 
-export function setSessionCookie(res: Response, token: string): void {
+/**
+ * `Secure` follows the request: set whenever it arrived over https — directly, or through a proxy
+ * trusted by TRUST_PROXY that says so in X-Forwarded-Proto (Express's req.secure) — and always in
+ * production, where plain http is not expected.
+ */
+function secureFor(req: Request): boolean {
+  return req.secure || config.env === 'production';
+}
+
+export function setSessionCookie(req: Request, res: Response, token: string): void {
   res.cookie(SESSION_COOKIE, token, {
     httpOnly: true,
     sameSite: 'lax',
-    secure: config.env === 'production',
+    secure: secureFor(req),
     maxAge: config.jwtTtlSeconds * 1000,
     path: '/',
   });
 }
 
-export function clearSessionCookie(res: Response): void {
-  res.clearCookie(SESSION_COOKIE, { path: '/', httpOnly: true, sameSite: 'lax', secure: config.env === 'production' });
+export function clearSessionCookie(req: Request, res: Response): void {
+  res.clearCookie(SESSION_COOKIE, { path: '/', httpOnly: true, sameSite: 'lax', secure: secureFor(req) });
 }

@@ -53,7 +53,13 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     appError = new AppError({ status: 500, code: 'internal_error', message: 'Something went wrong on our side.' });
   }
   if (res.headersSent) return;
+  if (appError.retryAfterSeconds !== undefined) res.setHeader('Retry-After', String(appError.retryAfterSeconds));
   res.status(appError.status).json({
-    error: { code: appError.code, message: appError.message, ...(appError.fields ? { fields: appError.fields } : {}) },
+    error: {
+      code: appError.code,
+      message: appError.message,
+      ...(appError.fields ? { fields: appError.fields } : {}),
+      ...(appError.retryAfterSeconds !== undefined ? { retryAfterSeconds: appError.retryAfterSeconds } : {}),
+    },
   });
 };

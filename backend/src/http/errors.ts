@@ -5,6 +5,8 @@ export interface AppErrorOptions {
   code: string;
   message: string;
   fields?: FieldError[];
+  /** For 429: seconds until a retry can succeed; sent as the Retry-After header and in the body. */
+  retryAfterSeconds?: number;
 }
 
 /** The one error type of the API: carries its HTTP status, a stable code and a readable message. */
@@ -12,13 +14,15 @@ export class AppError extends Error {
   readonly status: number;
   readonly code: string;
   readonly fields?: FieldError[];
+  readonly retryAfterSeconds?: number;
 
-  constructor({ status, code, message, fields }: AppErrorOptions) {
+  constructor({ status, code, message, fields, retryAfterSeconds }: AppErrorOptions) {
     super(message);
     this.name = 'AppError';
     this.status = status;
     this.code = code;
     this.fields = fields;
+    this.retryAfterSeconds = retryAfterSeconds;
   }
 
   static validation(message: string, fields: FieldError[]) {
@@ -35,6 +39,15 @@ export class AppError extends Error {
   }
   static conflict(message: string, code = 'conflict') {
     return new AppError({ status: 409, code, message });
+  }
+  static tooManyAttempts(what: string, retryAfterSeconds: number) {
+    const seconds = Math.max(1, Math.ceil(retryAfterSeconds));
+    return new AppError({
+      status: 429,
+      code: 'too_many_attempts',
+      message: `${what} Try again in ${seconds} ${seconds === 1 ? 'second' : 'seconds'}.`,
+      retryAfterSeconds: seconds,
+    });
   }
   static staleVersion(what = 'record') {
     return new AppError({

@@ -17,12 +17,12 @@ invitationsRouter.get('/lookup', validate({ query: invitationTokenQuerySchema })
   res.json(await lookupInvitation(query.token));
 });
 
-invitationsRouter.post('/accept', validate({ body: acceptInvitationRequestSchema }), async (_req, res) => {
+invitationsRouter.post('/accept', validate({ body: acceptInvitationRequestSchema }), async (req, res) => {
   const { body } = validated(res, { body: acceptInvitationRequestSchema });
   const userId = await acceptInvitation(body);
   const user = await UserRecord.findByPk(userId, { include: [{ model: Workspace, as: 'workspace' }] });
   const token = issueSessionToken(user!);
-  setSessionCookie(res, token);
+  setSessionCookie(req, res, token);
   res.status(201).json({ user: toSessionUser(toAuthUser(user!)), token });
 });
 
@@ -32,7 +32,7 @@ invitationsRouter.get('/', requireAuth, requireRole('admin'), async (req, res) =
 
 invitationsRouter.post('/', requireAuth, requireRole('admin'), validate({ body: createInvitationRequestSchema }), async (req, res) => {
   const { body } = validated(res, { body: createInvitationRequestSchema });
-  res.status(201).json({ invitation: await createInvitation(req.user!, body) });
+  res.status(201).json(await createInvitation(req.user!, body));
 });
 
 invitationsRouter.delete('/:id', requireAuth, requireRole('admin'), validate({ params: idParamsSchema }), async (req, res) => {

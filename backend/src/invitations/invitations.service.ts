@@ -4,7 +4,7 @@ import { appUrl } from '../app-url';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
 import { sendMail } from '../mail/mailer';
-import { linkMail } from '../mail/templates';
+import { linkMail, plainMail } from '../mail/templates';
 import { recordAudit } from '../audit/audit.service';
 import { hashToken, newOneTimeToken } from '../auth/one-time-token';
 import { hashPassword } from '../auth/passwords';
@@ -45,18 +45,34 @@ export async function listInvitations(workspaceId: number): Promise<Invitation[]
   return rows.map(toDto);
 }
 
-/** Creates an invitation and e-mails its one-time link; if the mail cannot be sent, nothing is kept. */
-export async function createInvitation(actor: AuthUser, input: CreateInvitationRequest): Promise<Invitation> {
+/**
+ * Creates an invitation and e-mails its one-time link; if the mail cannot be sent, nothing is kept.
+ *
+ * An address belongs to one workspace (users.email is unique). Inviting a member of this
+ * workspace answers 409 `already_member` (the administrator can see their own members anyway).
+ * Inviting an address that has an account in ANOTHER workspace must not tell this workspace so:
+ * the answer, the invitation kept and the time taken are those of any invitation, and a message
+ * goes to the address; only its owner learns, from that message, that the address cannot join
+ * (it carries no link, so the invitation simply expires). See DEVELOPERS.md, "Invitations".
+ * A new invitation to an address with a pending one replaces it (`resent: true`).
+ */
+export async function createInvitation(actor: AuthUser, input: CreateInvitationRequest): Promise<{ invitation: Invitation; resent: boolean }> {
   const existing = await UserRecord.findOne({ where: { email: input.email } });
-  if (existing) {
-    throw new AppError({ status: 409, code: 'email_taken', message: 'That address already belongs to an account.', fields: [{ field: 'email', message: 'already belongs to an account' }] });
+  if (existing && existing.workspaceId === actor.workspaceId) {
+    throw new AppError({
+      status: 409,
+      code: 'already_member',
+      message: `${input.email} is already a member of this workspace${existing.disabled ? ' (disabled; enable them under Users)' : ''}.`,
+      fields: [{ field: 'email', message: 'is already a member of this workspace' }],
+    });
   }
+  const elsewhere = existing !== null;
   const { token, tokenHash } = newOneTimeToken();
   return sequelize.transaction(async (transaction) => {
-    // A new invitation to the same address replaces any pending one.
-    await InvitationRecord.update(
+    // A new invitation to the same address replaces any pending one (an expired one stays expired).
+    const [replaced] = await InvitationRecord.update(
       { revokedAt: new Date() },
-      { where: { workspaceId: actor.workspaceId, email: input.email, acceptedAt: null, revokedAt: null }, transaction },
+      { where: { workspaceId: actor.workspaceId, email: input.email, acceptedAt: null, revokedAt: null, expiresAt: { [Op.gt]: new Date() } }, transaction },
     );
     const invitation = await InvitationRecord.create(
       {
@@ -70,23 +86,35 @@ export async function createInvitation(actor: AuthUser, input: CreateInvitationR
       },
       { transaction },
     );
-    await recordAudit({ workspaceId: actor.workspaceId, actorId: actor.id, action: 'invitation.create', entityType: 'invitation', entityId: invitation.id, detail: { email: input.email, role: input.role } }, transaction);
-    const link = appUrl(`/accept-invitation?token=${encodeURIComponent(token)}`);
-    const body = linkMail({
-      greeting: `Hello ${input.name},`,
-      lines: [`${actor.name} invites you to join ${actor.workspace.name} on Packwright as ${input.role}.`, `The link is valid for ${INVITATION_VALID_HOURS} hours and works once.`],
-      linkLabel: 'Accept the invitation and choose a password',
-      link,
-      footer: 'If you did not expect this invitation, you can ignore this message.',
-    });
+    // The audit detail stays as for any invitation: the workspace's records must not tell either.
+    await recordAudit({ workspaceId: actor.workspaceId, actorId: actor.id, action: 'invitation.create', entityType: 'invitation', entityId: invitation.id, detail: { email: input.email, role: input.role, resent: replaced > 0 } }, transaction);
+    const invitedTo = `${actor.name} invites you to join ${actor.workspace.name} on Packwright as ${input.role}.`;
+    const body = elsewhere
+      ? plainMail({
+          greeting: `Hello ${input.name},`,
+          lines: [
+            invitedTo,
+            'This address already has a Packwright account in another workspace, and an address can belong to one workspace only, so this invitation cannot be accepted.',
+            `To join ${actor.workspace.name}, ask ${actor.name} to invite another address of yours. We have not told ${actor.workspace.name} that this address has an account.`,
+          ],
+        })
+      : linkMail({
+          greeting: `Hello ${input.name},`,
+          lines: [invitedTo, `The link is valid for ${INVITATION_VALID_HOURS} hours and works once.`],
+          linkLabel: 'Accept the invitation and choose a password',
+          link: appUrl(`/accept-invitation?token=${encodeURIComponent(token)}`),
+          footer: 'If you did not expect this invitation, you can ignore this message.',
+        });
     try {
-      await sendMail({ to: input.email, subject: `You are invited to ${actor.workspace.name} on Packwright`, ...body, workspaceId: actor.workspaceId });
+      // The message belongs to its recipient: one with an account elsewhere is filed under their own
+      // workspace, so the inviting workspace's mail view (the local sink) does not show it either.
+      await sendMail({ to: input.email, subject: `You are invited to ${actor.workspace.name} on Packwright`, ...body, workspaceId: existing?.workspaceId ?? actor.workspaceId });
     } catch (error) {
       console.error('[mail] invitation could not be sent:', error);
       throw new AppError({ status: 503, code: 'mail_unavailable', message: 'The invitation e-mail could not be sent, so no invitation was created. Check the mail settings and try again.' });
     }
     invitation.invitedBy = await UserRecord.findByPk(actor.id, { transaction }) ?? undefined;
-    return toDto(invitation);
+    return { invitation: toDto(invitation), resent: replaced > 0 };
   });
 }
 

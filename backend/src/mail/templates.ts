@@ -10,6 +10,16 @@ ${opts.lines.map((l) => `<p>${escapeHtml(l)}</p>`).join('\n')}
   return { text, html };
 }
 
+/** A message without a link: greeting and lines, text and HTML. */
+export function plainMail(opts: { greeting: string; lines: string[] }) {
+  const text = [opts.greeting, '', ...opts.lines].join('\n');
+  const html = `<!doctype html><html><body style="font-family:sans-serif;line-height:1.5">
+<p>${escapeHtml(opts.greeting)}</p>
+${opts.lines.map((l) => `<p>${escapeHtml(l)}</p>`).join('\n')}
+</body></html>`;
+  return { text, html };
+}
+
 export function escapeHtml(value: string): string {
   return value.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 }

@@ -96,6 +96,26 @@ export async function submitCandidate(actor: AuthUser, id: number, comment: stri
   return { candidate: toCandidateDto(candidate), status: await reviewStatus(candidate) };
 }
 
+/**
+ * Separation of duties: the regulatory decision on a candidate revision must come from someone
+ * other than whoever made its chemistry decision — whatever role that person holds now (a chemist
+ * made a reviewer keeps their chemistry decisions). Each revision is its own candidate row, so
+ * "this revision" is this candidate id.
+ */
+async function refuseSecondSignOff(actor: AuthUser, candidate: CandidateRecord, transaction: Transaction): Promise<void> {
+  const own = await ReviewRecordModel.findOne({
+    where: { workspaceId: actor.workspaceId, candidateId: candidate.id, stage: 'chemistry', reviewerId: actor.id },
+    order: [['createdAt', 'DESC']],
+    transaction,
+  });
+  if (!own) return;
+  throw new AppError({
+    status: 403,
+    code: 'separation_of_duties',
+    message: `You made the chemistry decision on revision ${candidate.revision} of this candidate (${own.createdAt.toISOString().slice(0, 10)}), so its regulatory decision must come from another reviewer.`,
+  });
+}
+
 /** Chemist in chemistry review, reviewer in regulatory review: approve, request changes, or reject. */
 export async function decideReview(actor: AuthUser, id: number, body: DecisionBody): Promise<TransitionResult & { review: ReviewRecord }> {
   const action = reviewAction(body.stage, body.verdict);
@@ -103,6 +123,7 @@ export async function decideReview(actor: AuthUser, id: number, body: DecisionBo
     const candidate = await findCandidate(actor.workspaceId, id, transaction, true);
     const from = candidate.state;
     const to = transitionOrThrow(from, action, actor.role);
+    if (body.stage === 'regulatory') await refuseSecondSignOff(actor, candidate, transaction);
     const review = await ReviewRecordModel.create(
       { workspaceId: actor.workspaceId, candidateId: id, stage: body.stage, verdict: body.verdict, checklist: body.checklist as Record<string, unknown>, comment: body.comment, reviewerId: actor.id, fromState: from, toState: to },
       { transaction },

@@ -3,6 +3,7 @@ import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthUser } from '../auth/session-user';
+import { ReviewRecordModel } from '../reviews/review.model';
 import { UserRecord } from './user.model';
 
 export function toUserDto(user: UserRecord): User {
@@ -47,6 +48,15 @@ export async function updateUser(actor: AuthUser, userId: number, change: Update
       { workspaceId: actor.workspaceId, actorId: actor.id, action: 'user.update', entityType: 'user', entityId: user.id, detail: { before, after: { role: user.role, disabled: user.disabled } } },
       transaction,
     );
+    // A role change gets an entry of its own: who changed whose role, from what to what, and
+    // which sign-offs the member had already given (separation of duties follows the person).
+    if (before.role !== user.role) {
+      const decisions = await ReviewRecordModel.count({ where: { workspaceId: actor.workspaceId, reviewerId: user.id }, transaction });
+      await recordAudit(
+        { workspaceId: actor.workspaceId, actorId: actor.id, action: 'user.role_change', entityType: 'user', entityId: user.id, detail: { email: user.email, from: before.role, to: user.role, reviewDecisionsSoFar: decisions } },
+        transaction,
+      );
+    }
     return toUserDto(user);
   });
 }

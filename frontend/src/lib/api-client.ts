@@ -11,12 +11,15 @@ export class ApiError extends Error {
   readonly status: number;
   readonly code: string;
   readonly fields: FieldError[];
+  /** With 429: seconds until a retry can succeed (the Retry-After header), else null. */
+  readonly retryAfterSeconds: number | null;
 
-  constructor(options: { status: number; code: string; message: string; fields?: FieldError[] }) {
+  constructor(options: { status: number; code: string; message: string; fields?: FieldError[]; retryAfterSeconds?: number | null }) {
     super(options.message);
     this.status = options.status;
     this.code = options.code;
     this.fields = options.fields ?? [];
+    this.retryAfterSeconds = options.retryAfterSeconds ?? null;
   }
 
   /** The server's message for one field, if it sent one. */
@@ -90,6 +93,16 @@ async function readJson(response: Response): Promise<unknown> {
   }
 }
 
+/** Retry-After in seconds (the header may also be an HTTP date), preferring the body's figure. */
+function retryAfterSeconds(response: Response, fromBody: number | undefined): number | null {
+  if (fromBody !== undefined) return fromBody;
+  const header = response.headers.get('Retry-After');
+  if (!header) return null;
+  if (/^\d+$/.test(header.trim())) return Number(header.trim());
+  const at = Date.parse(header);
+  return Number.isNaN(at) ? null : Math.max(1, Math.ceil((at - Date.now()) / 1000));
+}
+
 const FALLBACK_MESSAGES: Record<number, string> = {
   401: 'Please sign in to continue.',
   403: 'Your role does not allow this.',
@@ -145,6 +158,7 @@ async function request<S extends z.ZodType | undefined>(
         ? parsed.data.error.message
         : (FALLBACK_MESSAGES[response.status] ?? `The server answered ${response.status}. Try again in a moment.`),
       fields: parsed.success ? parsed.data.error.fields : undefined,
+      retryAfterSeconds: retryAfterSeconds(response, parsed.success ? parsed.data.error.retryAfterSeconds : undefined),
     });
     if (response.status === 401 && !PATHS_THAT_HANDLE_401.includes(path)) {
       onUnauthorized(currentPath());

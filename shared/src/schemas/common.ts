@@ -120,6 +120,8 @@ export const apiErrorSchema = z.object({
     code: z.string(),
     message: z.string(),
     fields: z.array(z.object({ field: z.string(), message: z.string() })).optional(),
+    /** With 429: seconds until a retry can succeed (also the Retry-After header). */
+    retryAfterSeconds: z.number().int().positive().optional(),
   }),
 });
 export type ApiErrorBody = z.infer<typeof apiErrorSchema>;

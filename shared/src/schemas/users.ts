@@ -42,6 +42,9 @@ export const invitationSchema = z.object({
 });
 export type Invitation = z.infer<typeof invitationSchema>;
 export const invitationListResponseSchema = z.object({ invitations: z.array(invitationSchema) });
+/** `resent`: a pending invitation to this address in this workspace was replaced; its link no longer works. */
+export const createInvitationResponseSchema = z.object({ invitation: invitationSchema, resent: z.boolean() });
+export type CreateInvitationResponse = z.infer<typeof createInvitationResponseSchema>;
 
 export const createInvitationRequestSchema = z.object({
   email: emailSchema,

@@ -1,5 +1,5 @@
 // Shared set-up for API tests: the real Express app against the real PostgreSQL that
-// scripts/test.ts started, migrated and seeded. Each test file gets its own app and mail sink.
+// scripts/test.ts started, migrated and seeded. Each test file gets its own app, mail sink and mail worker.
 import { afterAll, beforeAll } from 'vitest';
 import request from 'supertest';
 import type { Express } from 'express';
@@ -41,8 +41,13 @@ export function useHarness(): Harness {
     state.closeSink = sink.close;
     state.mailSinkPort = sink.port;
     state.app = createApp({ staticDir: null });
+    // Background mail (password-reset links) goes out through the pg-boss mail queue.
+    const { startMailWorker } = await import('../../../backend/src/mail/mail-queue');
+    await startMailWorker();
   });
   afterAll(async () => {
+    const { stopRunQueue } = await import('../../../backend/src/runs/run-queue');
+    await stopRunQueue();
     await state.closeSink?.();
     const { sequelize } = await import('../../../backend/src/db/sequelize');
     await sequelize.close();

@@ -1,15 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
-import { invitationSchema, type CreateInvitationRequest, type Invitation } from '@shared/schemas/users';
+import { createInvitationResponseSchema, type CreateInvitationRequest, type CreateInvitationResponse } from '@shared/schemas/users';
 import { api } from '@/lib/api-client';
 import { invitationsKeys } from './get-invitations';
 
-const createInvitationResponseSchema = z.object({ invitation: invitationSchema });
-
-/** Invites someone by mail; 409 when a member already has that address. */
-export async function createInvitation(body: CreateInvitationRequest): Promise<Invitation> {
-  const { invitation } = await api.post('/api/invitations', { body, schema: createInvitationResponseSchema });
-  return invitation;
+/** Invites someone by mail (`resent` when it replaced a pending invitation); 409 when a member of this workspace has that address. */
+export function createInvitation(body: CreateInvitationRequest): Promise<CreateInvitationResponse> {
+  return api.post('/api/invitations', { body, schema: createInvitationResponseSchema });
 }
 
 export function useCreateInvitation() {

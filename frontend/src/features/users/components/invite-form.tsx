@@ -14,7 +14,7 @@ type Schema = typeof createInvitationRequestSchema;
 
 export function InviteForm() {
   const [formError, setFormError] = useState<string | null>(null);
-  const [sentTo, setSentTo] = useState<string | null>(null);
+  const [sent, setSent] = useState<{ email: string; resent: boolean } | null>(null);
   const form = useForm<z.input<Schema>, unknown, z.output<Schema>>({
     resolver: zodResolver(createInvitationRequestSchema),
     defaultValues: { email: '', name: '', role: 'designer' },
@@ -24,10 +24,10 @@ export function InviteForm() {
 
   const onSubmit = form.handleSubmit((values) => {
     setFormError(null);
-    setSentTo(null);
+    setSent(null);
     invite.mutate(values, {
-      onSuccess: (invitation) => {
-        setSentTo(invitation.email);
+      onSuccess: ({ invitation, resent }) => {
+        setSent({ email: invitation.email, resent });
         form.reset({ email: '', name: '', role: values.role });
       },
       onError: (error) => {
@@ -43,9 +43,11 @@ export function InviteForm() {
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <FormMessage>{formError}</FormMessage>
-      {sentTo && (
+      {sent && (
         <FormMessage tone="success">
-          Invitation sent to {sentTo}. The link works for {INVITATION_VALID_HOURS} hours.
+          {sent.resent
+            ? `Invitation sent again to ${sent.email}. The earlier link no longer works; the new one works for ${INVITATION_VALID_HOURS} hours.`
+            : `Invitation sent to ${sent.email}. The link works for ${INVITATION_VALID_HOURS} hours.`}
         </FormMessage>
       )}
       <div className="grid gap-4 sm:grid-cols-2">
