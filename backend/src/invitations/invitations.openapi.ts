@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { acceptInvitationRequestSchema, createInvitationRequestSchema, idParamsSchema, invitationListResponseSchema, invitationLookupResponseSchema, invitationSchema, invitationTokenQuerySchema, loginResponseSchema } from '@shared/schemas';
+import { acceptInvitationRequestSchema, createInvitationRequestSchema, idParamsSchema, invitationListQuerySchema, invitationListResponseSchema, invitationLookupResponseSchema, invitationSchema, invitationTokenQuerySchema, loginResponseSchema } from '@shared/schemas';
 import { documentRoute } from '../openapi/registry';
 
-documentRoute({ method: 'get', path: '/invitations', summary: 'Invitations of the workspace', tag: 'invitations', roles: ['admin'], response: invitationListResponseSchema });
+documentRoute({ method: 'get', path: '/invitations', summary: 'Invitations of the workspace, paged (status filter, sort)', tag: 'invitations', roles: ['admin'], query: invitationListQuerySchema, response: invitationListResponseSchema });
 documentRoute({ method: 'post', path: '/invitations', summary: 'Invite someone by e-mail (one-time link valid 72 h)', tag: 'invitations', roles: ['admin'], body: createInvitationRequestSchema, response: z.object({ invitation: invitationSchema }), status: 201 });
 documentRoute({ method: 'delete', path: '/invitations/:id', summary: 'Revoke a pending invitation', tag: 'invitations', roles: ['admin'], params: idParamsSchema, status: 204 });
 documentRoute({ method: 'get', path: '/invitations/lookup', summary: 'What an invitation link is for', tag: 'invitations', query: invitationTokenQuerySchema, response: invitationLookupResponseSchema });
