@@ -49,12 +49,12 @@ describe('briefs', () => {
 
   it('bad input names the field and the rule, and nothing is stored', async () => {
     const token = await h.token(demo.designer);
-    const before = (await request(h.app).get('/api/briefs').set(bearer(token))).body.briefs.length;
+    const before = (await request(h.app).get('/api/briefs').set(bearer(token))).body.total;
     const res = await request(h.app).post('/api/briefs').set(bearer(token)).send({ name: 'Bad', packType: 'cold', targetTempC: 30, maxMassG: -5, maxActives: 4 });
     expect(res.status).toBe(400);
     const fields = res.body.error.fields.map((f: { field: string }) => f.field);
     expect(fields).toEqual(expect.arrayContaining(['maxMassG', 'maxActives']));
-    const after = (await request(h.app).get('/api/briefs').set(bearer(token))).body.briefs.length;
+    const after = (await request(h.app).get('/api/briefs').set(bearer(token))).body.total;
     expect(after).toBe(before);
   });
 
@@ -82,7 +82,7 @@ describe('briefs', () => {
     expect((await request(h.app).get(`/api/briefs/${mine.id}`).set(bearer(theirs))).status).toBe(404);
     expect((await request(h.app).patch(`/api/briefs/${mine.id}`).set(bearer(theirs)).send({ holdMin: 5, version: 0 })).status).toBe(404);
     expect((await request(h.app).post(`/api/briefs/${mine.id}/runs`).set(bearer(theirs))).status).toBe(404);
-    const list = (await request(h.app).get('/api/briefs').set(bearer(theirs))).body.briefs.map((b: { id: number }) => b.id);
+    const list = (await request(h.app).get('/api/briefs').query({ pageSize: 200 }).set(bearer(theirs))).body.items.map((b: { id: number }) => b.id);
     expect(list).not.toContain(mine.id);
   });
 });

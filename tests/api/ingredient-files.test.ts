@@ -16,7 +16,7 @@ afterAll(async () => {
 
 async function namesInLibrary(email: string): Promise<string[]> {
   const res = await request(h.app).get('/api/ingredients').query({ q: tag, pageSize: 200 }).set(await auth(email));
-  return res.body.ingredients.map((i: { name: string }) => i.name);
+  return res.body.items.map((i: { name: string }) => i.name);
 }
 
 const processCell = (solidKey: string) => `"${JSON.stringify({ kind: 'dissolution', solidKey }).replace(/"/g, '""')}"`;
@@ -34,10 +34,10 @@ describe('POST /api/ingredients/import', () => {
     expect(res.body).toEqual({ dryRun: false, rows: 2, created: 2, updated: 0 });
     expect((await namesInLibrary(demo.designer)).sort()).toEqual([`Potassium chloride ${tag}`, `Water ${tag}`]);
     const list = await request(h.app).get('/api/ingredients').query({ q: `Potassium chloride ${tag}` }).set(await auth(demo.designer));
-    const kcl = list.body.ingredients[0];
+    const kcl = list.body.items[0];
     expect(kcl).toMatchObject({ costPerKg: '0.95', sources: ['CRC Handbook', 'NBS 1982'], speciesKey: 'KCl(cr)' });
     const history = await request(h.app).get(`/api/ingredients/${kcl.id}/history`).set(await auth(demo.designer));
-    expect(history.body.events[0]).toMatchObject({ action: 'ingredient.create', actor: 'Chen Chemist', detail: { via: 'import', row: 2 } });
+    expect(history.body.items[0]).toMatchObject({ action: 'ingredient.create', actor: 'Chen Chemist', detail: { via: 'import', row: 2 } });
   });
 
   it('dryRun=true checks and counts but writes nothing', async () => {
@@ -180,7 +180,7 @@ describe('ingredient attachments', () => {
 
     const list = await request(h.app).get(`/api/ingredients/${id}/attachments`).set(await auth(demo.reviewer));
     expect(list.status).toBe(200);
-    expect(list.body.attachments.map((a: { id: number }) => a.id)).toEqual([up.body.attachment.id]);
+    expect(list.body.items.map((a: { id: number }) => a.id)).toEqual([up.body.attachment.id]);
 
     const down = await request(h.app).get(`/api/attachments/${up.body.attachment.id}/download`).set(await auth(demo.designer)).buffer(true).parse((res, cb) => {
       const chunks: Buffer[] = [];
@@ -200,7 +200,7 @@ describe('ingredient attachments', () => {
     const res = await request(h.app).post(`/api/ingredients/${id}/attachments`).set(await auth(demo.chemist)).attach('file', png, { filename: 'sds.pdf', contentType: 'application/pdf' });
     expect(res.status).toBe(415);
     const list = await request(h.app).get(`/api/ingredients/${id}/attachments`).set(await auth(demo.chemist));
-    expect(list.body.attachments).toEqual([]);
+    expect(list.body.items).toEqual([]);
   });
 
   it('a file over 5 MB is refused (413)', async () => {

@@ -22,7 +22,7 @@ interface Row {
 
 async function library(email: string): Promise<Row[]> {
   const res = await request(h.app).get('/api/ingredients').query({ pageSize: 200 }).set(await auth(email));
-  return res.body.ingredients as Row[];
+  return res.body.items as Row[];
 }
 
 const ironLike = (needs: unknown) => ({

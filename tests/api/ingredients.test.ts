@@ -39,20 +39,20 @@ describe('GET /api/ingredients', () => {
 
   it('filters by role, searches by name, sorts by cost, pages', async () => {
     const packaging = await request(h.app).get('/api/ingredients').query({ role: 'packaging', pageSize: 200 }).set(await auth(demo.designer));
-    expect(packaging.body.ingredients.length).toBeGreaterThan(0);
-    expect(packaging.body.ingredients.every((i: { role: string }) => i.role === 'packaging')).toBe(true);
+    expect(packaging.body.items.length).toBeGreaterThan(0);
+    expect(packaging.body.items.every((i: { role: string }) => i.role === 'packaging')).toBe(true);
 
     const chloride = await request(h.app).get('/api/ingredients').query({ q: 'chloride', pageSize: 200 }).set(await auth(demo.designer));
-    expect(chloride.body.ingredients.length).toBeGreaterThan(2);
-    expect(chloride.body.ingredients.every((i: { name: string; grade: string; notes: string; speciesKey: string | null }) => /chloride|Cl/i.test(`${i.name} ${i.grade} ${i.notes} ${i.speciesKey}`))).toBe(true);
+    expect(chloride.body.items.length).toBeGreaterThan(2);
+    expect(chloride.body.items.every((i: { name: string; grade: string; notes: string; speciesKey: string | null }) => /chloride|Cl/i.test(`${i.name} ${i.grade} ${i.notes} ${i.speciesKey}`))).toBe(true);
 
     const byCost = await request(h.app).get('/api/ingredients').query({ sort: '-costPerKg', pageSize: 200 }).set(await auth(demo.designer));
-    const costs = byCost.body.ingredients.map((i: { costPerKg: string }) => Number(i.costPerKg));
+    const costs = byCost.body.items.map((i: { costPerKg: string }) => Number(i.costPerKg));
     expect(costs).toEqual([...costs].sort((a, b) => b - a));
-    expect(byCost.body.ingredients.every((i: { costPerKg: string }) => typeof i.costPerKg === 'string' && /^\d+\.\d{2,4}$/.test(i.costPerKg))).toBe(true);
+    expect(byCost.body.items.every((i: { costPerKg: string }) => typeof i.costPerKg === 'string' && /^\d+\.\d{2,4}$/.test(i.costPerKg))).toBe(true);
 
     const page2 = await request(h.app).get('/api/ingredients').query({ pageSize: 10, page: 2 }).set(await auth(demo.designer));
-    expect(page2.body.ingredients).toHaveLength(10);
+    expect(page2.body.items).toHaveLength(10);
     expect(page2.body.page).toBe(2);
   });
 
@@ -65,10 +65,10 @@ describe('GET /api/ingredients', () => {
   it('workspaces see only their own library', async () => {
     const ours = await request(h.app).get('/api/ingredients').query({ pageSize: 200 }).set(await auth(demo.designer));
     const theirs = await request(h.app).get('/api/ingredients').query({ pageSize: 200 }).set(await auth(harbour.designer));
-    const ourIds = new Set(ours.body.ingredients.map((i: { id: number }) => i.id));
-    expect(theirs.body.ingredients.length).toBeGreaterThan(0);
-    expect(theirs.body.ingredients.some((i: { id: number }) => ourIds.has(i.id))).toBe(false);
-    expect(theirs.body.ingredients.every((i: { currency: string }) => i.currency === 'GBP')).toBe(true);
+    const ourIds = new Set(ours.body.items.map((i: { id: number }) => i.id));
+    expect(theirs.body.items.length).toBeGreaterThan(0);
+    expect(theirs.body.items.some((i: { id: number }) => ourIds.has(i.id))).toBe(false);
+    expect(theirs.body.items.every((i: { currency: string }) => i.currency === 'GBP')).toBe(true);
   });
 });
 
@@ -162,7 +162,7 @@ describe('ingredient writes', () => {
 
     const res = await request(h.app).get(`/api/ingredients/${id}/history`).set(await auth(demo.reviewer));
     expect(res.status).toBe(200);
-    const events = res.body.events as { action: string; actor: string; at: string; before: Record<string, unknown> | null; after: Record<string, unknown> | null }[];
+    const events = res.body.items as { action: string; actor: string; at: string; before: Record<string, unknown> | null; after: Record<string, unknown> | null }[];
     expect(events.map((e) => e.action)).toEqual(['ingredient.create', 'ingredient.update', 'ingredient.delete']);
     expect(events.map((e) => e.actor)).toEqual(['Chen Chemist', 'Ada Admin', 'Chen Chemist']);
     expect(events[0]!.before).toBeNull();

@@ -29,7 +29,7 @@ async function counts() {
 
 async function ingredientByName(token: string, name: string) {
   const res = await request(h.app).get('/api/ingredients').query({ q: name }).set(bearer(token));
-  const found = (res.body.ingredients ?? res.body.items ?? []).find((i: { name: string }) => i.name === name);
+  const found = (res.body.items ?? []).find((i: { name: string }) => i.name === name);
   if (!found) throw new Error(`demo ingredient ${name} not found`);
   return found as { id: number; name: string; process: LabScenario['components'][number]['process'] };
 }
@@ -173,8 +173,8 @@ describe('lab logs: overlay, fit, calibration', () => {
     expect(audit[0]!.detail).toHaveProperty('after');
 
     const list = await request(h.app).get('/api/calibrations').set(bearer(await h.token(demo.reviewer)));
-    expect(list.body.calibrations.filter((c: { active: boolean; labLogId: number }) => c.active && c.labLogId === id)).toHaveLength(2);
-    expect((await request(h.app).get('/api/calibrations').set(bearer(await h.token(harbour.chemist)))).body.calibrations.some((c: { labLogId: number }) => c.labLogId === id)).toBe(false);
+    expect(list.body.items.filter((c: { active: boolean; labLogId: number }) => c.active && c.labLogId === id)).toHaveLength(2);
+    expect((await request(h.app).get('/api/calibrations').set(bearer(await h.token(harbour.chemist)))).body.items.some((c: { labLogId: number }) => c.labLogId === id)).toBe(false);
 
     // A run started after applying records both calibrations in its data snapshot.
     const designer = await h.token(demo.designer);
@@ -217,6 +217,6 @@ describe('lab logs: overlay, fit, calibration', () => {
     const wrong = await request(h.app).post('/api/calibrations').set(bearer(chemist)).send({ labLogId: id, scope: 'ingredient', ingredientId: urea.id });
     expect(wrong.status).toBe(400);
     const list = await request(h.app).get('/api/lab-logs').query({ candidateId: 999999 }).set(bearer(chemist));
-    expect(list.body.labLogs).toEqual([]);
+    expect(list.body.items).toEqual([]);
   }, 60_000);
 });

@@ -41,20 +41,20 @@ describe('roles × routes', () => {
     expect((await request(h.app).get('/api/users').set(bearer(await h.token(demo.designer)))).status).toBe(403);
     const ok = await request(h.app).get('/api/users').set(bearer(await h.token(demo.admin)));
     expect(ok.status).toBe(200);
-    expect(ok.body.users.map((u: { email: string }) => u.email)).toContain(demo.designer);
+    expect(ok.body.items.map((u: { email: string }) => u.email)).toContain(demo.designer);
   });
 });
 
 describe('workspace isolation', () => {
   it("an admin sees only their own workspace's members", async () => {
     const res = await request(h.app).get('/api/users').set(bearer(await h.token(harbour.admin)));
-    const emails = res.body.users.map((u: { email: string }) => u.email);
+    const emails = res.body.items.map((u: { email: string }) => u.email);
     expect(emails).toContain(harbour.designer);
     expect(emails).not.toContain(demo.designer);
   });
   it("changing another workspace's member answers 404", async () => {
     const demoUsers = await request(h.app).get('/api/users').set(bearer(await h.token(demo.admin)));
-    const target = demoUsers.body.users.find((u: { email: string }) => u.email === demo.reviewer);
+    const target = demoUsers.body.items.find((u: { email: string }) => u.email === demo.reviewer);
     const res = await request(h.app).patch(`/api/users/${target.id}`).set(bearer(await h.token(harbour.admin))).send({ role: 'admin', version: target.version });
     expect(res.status).toBe(404);
   });
@@ -70,8 +70,8 @@ describe('workspace isolation', () => {
     await waitForMail(h, email);
     const demoMail = await request(h.app).get('/api/mail-messages').set(bearer(await h.token(demo.admin)));
     const harbourMail = await request(h.app).get('/api/mail-messages').set(bearer(await h.token(harbour.admin)));
-    expect(demoMail.body.messages.some((m: { to: string[] }) => m.to.includes(email))).toBe(true);
-    expect(harbourMail.body.messages.some((m: { to: string[] }) => m.to.includes(email))).toBe(false);
+    expect(demoMail.body.items.some((m: { to: string[] }) => m.to.includes(email))).toBe(true);
+    expect(harbourMail.body.items.some((m: { to: string[] }) => m.to.includes(email))).toBe(false);
   });
 });
 

@@ -19,7 +19,7 @@ afterAll(cleanUp);
 async function findOne(email: string, q: string, phase: string) {
   const res = await request(h.app).get('/api/species').query({ q, phase, pageSize: 200 }).set(await auth(email));
   expect(res.status).toBe(200);
-  return res.body.species as { id: number; key: string; scope: string; version: number; dfH_kJ_per_mol: number | null; correctsId: number | null; source: string }[];
+  return res.body.items as { id: number; key: string; scope: string; version: number; dfH_kJ_per_mol: number | null; correctsId: number | null; source: string }[];
 }
 
 describe('GET /api/species', () => {
@@ -32,17 +32,17 @@ describe('GET /api/species', () => {
   it('searches by name, case-insensitively', async () => {
     const res = await request(h.app).get('/api/species').query({ q: 'AMMONIUM' }).set(await auth(demo.reviewer));
     expect(res.status).toBe(200);
-    expect(res.body.species.length).toBeGreaterThan(0);
-    expect(res.body.species.every((s: { name: string; formula: string }) => /ammonium/i.test(s.name) || /NH4/.test(s.formula))).toBe(true);
+    expect(res.body.items.length).toBeGreaterThan(0);
+    expect(res.body.items.every((s: { name: string; formula: string }) => /ammonium/i.test(s.name) || /NH4/.test(s.formula))).toBe(true);
   });
 
   it('pages: pageSize rows per page, total counts all', async () => {
     const first = await request(h.app).get('/api/species').query({ pageSize: 5, page: 1 }).set(await auth(demo.designer));
     const second = await request(h.app).get('/api/species').query({ pageSize: 5, page: 2 }).set(await auth(demo.designer));
-    expect(first.body.species).toHaveLength(5);
+    expect(first.body.items).toHaveLength(5);
     expect(first.body.total).toBeGreaterThan(100);
-    const ids = new Set(first.body.species.map((s: { id: number }) => s.id));
-    expect(second.body.species.some((s: { id: number }) => ids.has(s.id))).toBe(false);
+    const ids = new Set(first.body.items.map((s: { id: number }) => s.id));
+    expect(second.body.items.some((s: { id: number }) => ids.has(s.id))).toBe(false);
   });
 
   it('an unknown phase answers 400 naming the query field', async () => {

@@ -8,7 +8,7 @@ const auth = async (email: string) => ({ Authorization: `Bearer ${await h.token(
 async function ingredientNamed(email: string, name: string, grade?: string) {
   const res = await request(h.app).get('/api/ingredients').query({ q: name, pageSize: 200 }).set(await auth(email));
   expect(res.status).toBe(200);
-  const found = res.body.ingredients.find((i: { name: string; grade: string }) => i.name === name && (grade === undefined || i.grade === grade));
+  const found = res.body.items.find((i: { name: string; grade: string }) => i.name === name && (grade === undefined || i.grade === grade));
   if (!found) throw new Error(`no ingredient ${name} in the library of ${email}`);
   return found as { id: number; costPerKg: string; currency: string };
 }

@@ -1,7 +1,8 @@
 import { createHash } from 'node:crypto';
-import type { Attachment } from '@shared/schemas';
+import type { Attachment, Paged } from '@shared/schemas';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
+import { pageOf, pageWindow, sortColumn, type PageQuery } from '../http/paging';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthUser } from '../auth/session-user';
 import { UserRecord } from '../users/user.model';
@@ -71,15 +72,18 @@ export async function addAttachment(actor: AuthUser, ingredientId: number, file:
   });
 }
 
-export async function listAttachments(workspaceId: number, ingredientId: number): Promise<Attachment[]> {
+export async function listAttachments(workspaceId: number, ingredientId: number, query: PageQuery<'createdAt' | 'filename'>): Promise<Paged<Attachment>> {
   await ingredientOf(workspaceId, ingredientId);
-  const rows = await AttachmentRecord.findAll({
+  const { column, direction } = sortColumn(query.sort, { createdAt: 'createdAt', filename: 'filename' });
+  const { rows, count } = await AttachmentRecord.findAndCountAll({
     where: { workspaceId, ingredientId },
     attributes: { exclude: ['bytes'] },
     include: [{ model: UserRecord, as: 'uploadedBy', attributes: ['id', 'name'] }],
-    order: [['createdAt', 'DESC'], ['id', 'DESC']],
+    order: [[column, direction], ['id', direction]],
+    ...pageWindow(query),
+    distinct: true,
   });
-  return rows.map(toDto);
+  return pageOf(query, rows.map(toDto), count);
 }
 
 /** The stored file, for a member of the same workspace; another workspace's file answers 404. */

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { createBriefRequestSchema, updateBriefRequestSchema } from '@shared/schemas/briefs';
-import { briefIdParamsSchema } from '@shared/schemas/runs';
+import { briefIdParamsSchema, briefListQuerySchema, runListQuerySchema } from '@shared/schemas/runs';
 import { requireAuth, requireRole } from '../auth/auth.middleware';
 import { validate, validated } from '../http/validate';
 import { createRun, listRuns } from '../runs/runs.service';
@@ -11,8 +11,9 @@ export const briefsRouter = Router();
 briefsRouter.use(requireAuth);
 const writers = requireRole('designer', 'admin');
 
-briefsRouter.get('/', async (req, res) => {
-  res.json({ briefs: await listBriefs(req.user!.workspaceId) });
+briefsRouter.get('/', validate({ query: briefListQuerySchema }), async (req, res) => {
+  const { query } = validated(res, { query: briefListQuerySchema });
+  res.json(await listBriefs(req.user!.workspaceId, query));
 });
 
 briefsRouter.post('/', writers, validate({ body: createBriefRequestSchema }), async (req, res) => {
@@ -41,9 +42,9 @@ briefsRouter.delete('/:id', writers, validate({ params: briefIdParamsSchema }), 
   res.status(204).end();
 });
 
-briefsRouter.get('/:id/runs', validate({ params: briefIdParamsSchema }), async (req, res) => {
-  const { params } = validated(res, { params: briefIdParamsSchema });
-  res.json({ runs: await listRuns(req.user!.workspaceId, params.id) });
+briefsRouter.get('/:id/runs', validate({ params: briefIdParamsSchema, query: runListQuerySchema }), async (req, res) => {
+  const { params, query } = validated(res, { params: briefIdParamsSchema, query: runListQuerySchema });
+  res.json(await listRuns(req.user!.workspaceId, params.id, query));
 });
 
 /** Queues an optimisation run: 202 with the run's id; progress and results at GET /api/runs/:id. */

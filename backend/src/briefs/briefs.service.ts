@@ -1,9 +1,11 @@
 import { briefSchema, updateBriefRequestSchema, type Brief, type BriefInput } from '@shared/schemas/briefs';
-import type { BriefRecord as BriefDto } from '@shared/schemas/runs';
-import { fieldErrorsFromZod } from '@shared/schemas';
+import type { BriefListQuery, BriefRecord as BriefDto } from '@shared/schemas/runs';
+import { fieldErrorsFromZod, type Paged } from '@shared/schemas';
+import { QueryTypes } from 'sequelize';
 import type { z } from 'zod';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
+import { likePattern, pageOf, pageWindow, sortColumn } from '../http/paging';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthUser } from '../auth/session-user';
 import { UserRecord } from '../users/user.model';
@@ -33,9 +35,84 @@ async function toDto(b: BriefRecord): Promise<BriefDto> {
   };
 }
 
-export async function listBriefs(workspaceId: number): Promise<BriefDto[]> {
-  const rows = await BriefRecord.findAll({ where: { workspaceId }, include: withPeople, order: [['updatedAt', 'DESC']] });
-  return Promise.all(rows.map(toDto));
+interface BriefListRow {
+  id: number;
+  name: string;
+  pack_type: 'cold' | 'warm';
+  spec: BriefDto['spec'];
+  version: number;
+  created_at: Date;
+  updated_at: Date;
+  created_by: string | null;
+  updated_by: string | null;
+  last_run_id: number | null;
+  last_run_status: string | null;
+  last_run_created_at: Date | null;
+  last_run_candidates: string | null;
+  total: string;
+}
+
+const BRIEF_SORT_COLUMNS = { name: 'b.name', updatedAt: 'b.updated_at', createdAt: 'b.created_at' } as const;
+
+/**
+ * One page of the workspace's briefs, each with its last run and that run's candidate count, in
+ * one query: the last run by a lateral join, the count by a subquery, the total by a window.
+ */
+export async function listBriefs(workspaceId: number, query: BriefListQuery): Promise<Paged<BriefDto>> {
+  const where = ['b.workspace_id = :workspaceId'];
+  const replacements: Record<string, unknown> = { workspaceId, ...pageWindow(query) };
+  if (query.q) {
+    where.push('b.name ILIKE :q');
+    replacements.q = likePattern(query.q);
+  }
+  if (query.packType) {
+    where.push('b.pack_type = :packType');
+    replacements.packType = query.packType;
+  }
+  const { column, direction } = sortColumn(query.sort, BRIEF_SORT_COLUMNS);
+  const rows = await sequelize.query<BriefListRow>(
+    `SELECT b.id, b.name, b.pack_type, b.spec, b.version, b.created_at, b.updated_at,
+            cu.name AS created_by, uu.name AS updated_by,
+            lr.id AS last_run_id, lr.status AS last_run_status, lr.created_at AS last_run_created_at,
+            (SELECT count(*) FROM candidates c WHERE c.run_id = lr.id) AS last_run_candidates,
+            count(*) OVER () AS total
+       FROM briefs b
+       LEFT JOIN users cu ON cu.id = b.created_by_id
+       LEFT JOIN users uu ON uu.id = b.updated_by_id
+       LEFT JOIN LATERAL (
+         SELECT r.id, r.status, r.created_at FROM runs r
+          WHERE r.workspace_id = b.workspace_id AND r.brief_id = b.id
+          ORDER BY r.created_at DESC, r.id DESC LIMIT 1
+       ) lr ON true
+      WHERE ${where.join(' AND ')}
+      ORDER BY ${column} ${direction}, b.id ${direction}
+      LIMIT :limit OFFSET :offset`,
+    { replacements, type: QueryTypes.SELECT },
+  );
+  let total = rows[0] ? Number(rows[0].total) : 0;
+  if (rows.length === 0 && query.page > 1) {
+    // Past the last page: the window counted nothing, so count on its own.
+    const [counted] = await sequelize.query<{ n: string }>(`SELECT count(*) AS n FROM briefs b WHERE ${where.join(' AND ')}`, { replacements, type: QueryTypes.SELECT });
+    total = Number(counted?.n ?? 0);
+  }
+  const items = rows.map(
+    (r): BriefDto => ({
+      id: r.id,
+      name: r.name,
+      packType: r.pack_type,
+      spec: r.spec,
+      version: r.version,
+      createdBy: r.created_by ?? '',
+      updatedBy: r.updated_by ?? '',
+      createdAt: r.created_at.toISOString(),
+      updatedAt: r.updated_at.toISOString(),
+      lastRun:
+        r.last_run_id !== null
+          ? { id: r.last_run_id, status: r.last_run_status!, createdAt: r.last_run_created_at!.toISOString(), candidates: Number(r.last_run_candidates ?? 0) }
+          : null,
+    }),
+  );
+  return pageOf(query, items, total);
 }
 
 export async function findBrief(workspaceId: number, id: number): Promise<BriefRecord> {

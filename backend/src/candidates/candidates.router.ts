@@ -3,7 +3,8 @@ import { z } from 'zod';
 import { idParamsSchema } from '@shared/schemas';
 import { requireAuth, requireRole } from '../auth/auth.middleware';
 import { validate, validated } from '../http/validate';
-import { compareCandidates, getCandidate, getCandidateCurve, listShortlisted, setShortlisted } from './candidates.service';
+import { candidateListQuerySchema } from '@shared/schemas/runs';
+import { compareCandidates, getCandidate, getCandidateCurve, listCandidates, setShortlisted } from './candidates.service';
 import './candidates.openapi';
 
 export const compareQuerySchema = z.object({
@@ -17,8 +18,9 @@ export const shortlistBodySchema = z.object({ shortlisted: z.boolean({ error: 'm
 export const candidatesRouter = Router();
 candidatesRouter.use(requireAuth);
 
-candidatesRouter.get('/', async (req, res) => {
-  res.json({ candidates: await listShortlisted(req.user!.workspaceId) });
+candidatesRouter.get('/', validate({ query: candidateListQuerySchema }), async (req, res) => {
+  const { query } = validated(res, { query: candidateListQuerySchema });
+  res.json(await listCandidates(req.user!.workspaceId, query));
 });
 
 candidatesRouter.get('/compare', validate({ query: compareQuerySchema }), async (req, res) => {

@@ -1,10 +1,12 @@
 import { Op } from 'sequelize';
-import type { CandidateRecord as CandidateDto } from '@shared/schemas/runs';
+import type { CandidateListQuery, CandidateRecord as CandidateDto } from '@shared/schemas/runs';
+import type { Paged } from '@shared/schemas';
 import type { Brief } from '@shared/schemas/briefs';
 import type { CandidateCurve } from '@shared/schemas/runs';
 import { holdBand, verifyComposition } from '@shared/evaluation/verify';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
+import { pageOf, pageWindow, sortColumn } from '../http/paging';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthUser } from '../auth/session-user';
 import { RunRecord } from '../runs/run.model';
@@ -70,7 +72,13 @@ export async function setShortlisted(actor: AuthUser, id: number, shortlisted: b
   });
 }
 
-export async function listShortlisted(workspaceId: number): Promise<CandidateDto[]> {
-  const rows = await CandidateRecord.findAll({ where: { workspaceId, state: 'shortlisted' }, order: [['updatedAt', 'DESC']], limit: 50 });
-  return rows.map(toCandidateDto);
+/** A page of the workspace's candidates in one state (the shortlist unless another state is asked for). */
+export async function listCandidates(workspaceId: number, query: CandidateListQuery): Promise<Paged<CandidateDto>> {
+  const { column, direction } = sortColumn(query.sort, { updatedAt: 'updatedAt', rank: 'rank', createdAt: 'createdAt' });
+  const { rows, count } = await CandidateRecord.findAndCountAll({
+    where: { workspaceId, state: query.state, ...(query.briefId !== undefined ? { briefId: query.briefId } : {}) },
+    order: [[column, direction], ['id', direction]],
+    ...pageWindow(query),
+  });
+  return pageOf(query, rows.map(toCandidateDto), count);
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import {
+  attachmentListQuerySchema,
   attachmentListResponseSchema,
   attachmentSchema,
   createIngredientRequestSchema,
@@ -7,6 +8,7 @@ import {
   idParamsSchema,
   importQuerySchema,
   importResponseSchema,
+  ingredientHistoryQuerySchema,
   ingredientHistoryResponseSchema,
   ingredientListQuerySchema,
   ingredientListResponseSchema,
@@ -23,8 +25,8 @@ documentRoute({ method: 'get', path: '/ingredients/:id', summary: 'One ingredien
 documentRoute({ method: 'post', path: '/ingredients', summary: 'Add an ingredient (audited)', tag: 'ingredients', roles: [...write], body: createIngredientRequestSchema, response: z.object({ ingredient: ingredientSchema }), status: 201 });
 documentRoute({ method: 'patch', path: '/ingredients/:id', summary: 'Change an ingredient (409 on a stale version; audited with before/after)', tag: 'ingredients', roles: [...write], params: idParamsSchema, body: updateIngredientRequestSchema, response: z.object({ ingredient: ingredientSchema }) });
 documentRoute({ method: 'delete', path: '/ingredients/:id', summary: 'Remove an ingredient from the library (optional ?version= guards against a stale delete; audited)', tag: 'ingredients', roles: [...write], params: idParamsSchema, query: deleteIngredientQuerySchema, status: 204 });
-documentRoute({ method: 'get', path: '/ingredients/:id/history', summary: 'Audit events of an ingredient: who, when, before and after', tag: 'ingredients', roles: 'any', params: idParamsSchema, response: ingredientHistoryResponseSchema });
-documentRoute({ method: 'get', path: '/ingredients/:id/attachments', summary: 'Attachments of an ingredient (safety data sheets)', tag: 'ingredients', roles: 'any', params: idParamsSchema, response: attachmentListResponseSchema });
+documentRoute({ method: 'get', path: '/ingredients/:id/history', summary: 'Audit events of an ingredient, paged: who, when, before and after', tag: 'ingredients', roles: 'any', params: idParamsSchema, query: ingredientHistoryQuerySchema, response: ingredientHistoryResponseSchema });
+documentRoute({ method: 'get', path: '/ingredients/:id/attachments', summary: 'Attachments of an ingredient (safety data sheets)', tag: 'ingredients', roles: 'any', params: idParamsSchema, query: attachmentListQuerySchema, response: attachmentListResponseSchema });
 
 const errorContent = { 'application/json': { schema: apiErrorSchema } };
 const fileForm = (description: string) => ({

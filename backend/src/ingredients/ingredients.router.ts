@@ -3,7 +3,9 @@ import {
   createIngredientRequestSchema,
   deleteIngredientQuerySchema,
   idParamsSchema,
+  attachmentListQuerySchema,
   importQuerySchema,
+  ingredientHistoryQuerySchema,
   ingredientListQuerySchema,
   updateIngredientRequestSchema,
 } from '@shared/schemas';
@@ -80,14 +82,14 @@ ingredientsRouter.delete('/:id', canWrite, validate({ params: idParamsSchema, qu
   res.status(204).end();
 });
 
-ingredientsRouter.get('/:id/history', validate({ params: idParamsSchema }), async (req, res) => {
-  const { params } = validated(res, { params: idParamsSchema });
-  res.json(await ingredientHistory(req.user!.workspaceId, params.id));
+ingredientsRouter.get('/:id/history', validate({ params: idParamsSchema, query: ingredientHistoryQuerySchema }), async (req, res) => {
+  const { params, query } = validated(res, { params: idParamsSchema, query: ingredientHistoryQuerySchema });
+  res.json(await ingredientHistory(req.user!.workspaceId, params.id, query));
 });
 
-ingredientsRouter.get('/:id/attachments', validate({ params: idParamsSchema }), async (req, res) => {
-  const { params } = validated(res, { params: idParamsSchema });
-  res.json({ attachments: await listAttachments(req.user!.workspaceId, params.id) });
+ingredientsRouter.get('/:id/attachments', validate({ params: idParamsSchema, query: attachmentListQuerySchema }), async (req, res) => {
+  const { params, query } = validated(res, { params: idParamsSchema, query: attachmentListQuerySchema });
+  res.json(await listAttachments(req.user!.workspaceId, params.id, query));
 });
 
 ingredientsRouter.post(

@@ -8,11 +8,13 @@ import {
   type Ingredient,
   type IngredientNeed,
   type IngredientListQuery,
+  type Paged,
   type UpdateIngredientRequest,
 } from '@shared/schemas';
 import type { IngredientProcess } from '@shared/thermal/process';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
+import { likePattern, pageOf, pageWindow, sortColumn, type PageQuery } from '../http/paging';
 import { recordAudit } from '../audit/audit.service';
 import { AuditEventRecord } from '../audit/audit-event.model';
 import type { AuthUser } from '../auth/session-user';
@@ -61,31 +63,25 @@ const withUsers = [
   { model: UserRecord, as: 'updatedBy', attributes: ['id', 'name'] },
 ];
 
-const SORT_COLUMNS: Record<string, string> = { name: 'name', costPerKg: 'costPerKg', role: 'role', updatedAt: 'updatedAt' };
+const SORT_COLUMNS = { name: 'name', costPerKg: 'costPerKg', role: 'role', updatedAt: 'updatedAt' } as const;
 
-function likePattern(q: string): string {
-  return `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-}
-
-export async function listIngredients(workspaceId: number, query: IngredientListQuery) {
+export async function listIngredients(workspaceId: number, query: IngredientListQuery): Promise<Paged<Ingredient>> {
   const and: WhereOptions[] = [{ workspaceId }];
   if (query.q) {
     const p = likePattern(query.q);
     and.push({ [Op.or]: [{ name: { [Op.iLike]: p } }, { grade: { [Op.iLike]: p } }, { speciesKey: { [Op.iLike]: p } }, { notes: { [Op.iLike]: p } }] });
   }
   if (query.role) and.push({ role: query.role });
-  const descending = query.sort.startsWith('-');
-  const column = SORT_COLUMNS[query.sort.replace(/^-/, '')] ?? 'name';
-  const order: Order = [[column, descending ? 'DESC' : 'ASC'], ['name', 'ASC'], ['id', 'ASC']];
+  const { column, direction } = sortColumn(query.sort, SORT_COLUMNS);
+  const order: Order = [[column, direction], ['name', 'ASC'], ['id', 'ASC']];
   const { rows, count } = await IngredientRecord.findAndCountAll({
     where: { [Op.and]: and },
     include: withUsers,
     order,
-    limit: query.pageSize,
-    offset: (query.page - 1) * query.pageSize,
+    ...pageWindow(query),
     distinct: true,
   });
-  return { ingredients: rows.map(toIngredientDto), total: count, page: query.page, pageSize: query.pageSize };
+  return pageOf(query, rows.map(toIngredientDto), count);
 }
 
 async function findInWorkspace(workspaceId: number, id: number, transaction?: Transaction): Promise<IngredientRecord> {
@@ -256,26 +252,25 @@ export async function deleteIngredient(actor: AuthUser, id: number, version?: nu
 }
 
 /** The audit events of one ingredient, oldest first. */
-export async function ingredientHistory(workspaceId: number, id: number) {
-  const row = await IngredientRecord.findOne({ where: { id, workspaceId }, paranoid: false });
+export async function ingredientHistory(workspaceId: number, id: number, query: PageQuery<'at'>) {
+  const row = await IngredientRecord.findOne({ where: { id, workspaceId }, paranoid: false, attributes: ['id'] });
   if (!row) throw AppError.notFound('Ingredient');
-  const events = await AuditEventRecord.findAll({ where: { workspaceId, entityType: 'ingredient', entityId: String(id) }, order: [['id', 'ASC']] });
+  const direction = query.sort === '-at' ? 'DESC' : 'ASC';
+  const { rows: events, count } = await AuditEventRecord.findAndCountAll({
+    where: { workspaceId, entityType: 'ingredient', entityId: String(id) },
+    order: [['id', direction]],
+    ...pageWindow(query),
+  });
   const actorIds = [...new Set(events.map((e) => e.actorId).filter((x): x is number => x !== null))];
   const actors = new Map((await UserRecord.findAll({ where: { id: actorIds, workspaceId }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
-  return {
-    events: events.map((e) => {
+  return pageOf(
+    query,
+    events.map((e) => {
       const { before = null, after = null, ...rest } = e.detail as { before?: unknown; after?: unknown };
-      return {
-        id: Number(e.id),
-        action: e.action,
-        actor: e.actorId === null ? null : (actors.get(e.actorId) ?? null),
-        at: e.createdAt.toISOString(),
-        before,
-        after,
-        detail: rest,
-      };
+      return { id: Number(e.id), action: e.action, actor: e.actorId === null ? null : (actors.get(e.actorId) ?? null), at: e.createdAt.toISOString(), before, after, detail: rest };
     }),
-  };
+    count,
+  );
 }
 
 /** Active ingredients of a workspace by id (for mixture evaluation); a missing id → 404 naming the field. */

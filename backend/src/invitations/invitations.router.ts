@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { acceptInvitationRequestSchema, createInvitationRequestSchema, idParamsSchema, invitationTokenQuerySchema } from '@shared/schemas';
+import { acceptInvitationRequestSchema, createInvitationRequestSchema, idParamsSchema, invitationListQuerySchema, invitationTokenQuerySchema } from '@shared/schemas';
 import { requireAuth, requireRole } from '../auth/auth.middleware';
 import { issueSessionToken, setSessionCookie } from '../auth/session-token';
 import { toAuthUser, toSessionUser } from '../auth/session-user';
@@ -26,8 +26,9 @@ invitationsRouter.post('/accept', validate({ body: acceptInvitationRequestSchema
   res.status(201).json({ user: toSessionUser(toAuthUser(user!)), token });
 });
 
-invitationsRouter.get('/', requireAuth, requireRole('admin'), async (req, res) => {
-  res.json({ invitations: await listInvitations(req.user!.workspaceId) });
+invitationsRouter.get('/', requireAuth, requireRole('admin'), validate({ query: invitationListQuerySchema }), async (req, res) => {
+  const { query } = validated(res, { query: invitationListQuerySchema });
+  res.json(await listInvitations(req.user!.workspaceId, query));
 });
 
 invitationsRouter.post('/', requireAuth, requireRole('admin'), validate({ body: createInvitationRequestSchema }), async (req, res) => {

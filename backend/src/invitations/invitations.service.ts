@@ -1,8 +1,9 @@
-import { Op } from 'sequelize';
-import { INVITATION_VALID_HOURS, type AcceptInvitationRequest, type CreateInvitationRequest, type Invitation } from '@shared/schemas';
+import { Op, type WhereOptions } from 'sequelize';
+import { INVITATION_VALID_HOURS, type AcceptInvitationRequest, type CreateInvitationRequest, type Invitation, type InvitationListQuery, type Paged } from '@shared/schemas';
 import { appUrl } from '../app-url';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
+import { pageOf, pageWindow, sortColumn } from '../http/paging';
 import { sendMail } from '../mail/mailer';
 import { linkMail, plainMail } from '../mail/templates';
 import { recordAudit } from '../audit/audit.service';
@@ -36,13 +37,24 @@ function toDto(inv: InvitationRecord): Invitation {
   };
 }
 
-export async function listInvitations(workspaceId: number): Promise<Invitation[]> {
-  const rows = await InvitationRecord.findAll({
-    where: { workspaceId },
+/** The SQL condition of each status, the same rules as {@link statusOf}. */
+function statusWhere(status: Invitation['status'], now: Date): WhereOptions {
+  if (status === 'accepted') return { acceptedAt: { [Op.ne]: null } };
+  if (status === 'revoked') return { acceptedAt: null, revokedAt: { [Op.ne]: null } };
+  if (status === 'expired') return { acceptedAt: null, revokedAt: null, expiresAt: { [Op.lte]: now } };
+  return { acceptedAt: null, revokedAt: null, expiresAt: { [Op.gt]: now } };
+}
+
+export async function listInvitations(workspaceId: number, query: InvitationListQuery): Promise<Paged<Invitation>> {
+  const { column, direction } = sortColumn(query.sort, { createdAt: 'createdAt', email: 'email', expiresAt: 'expiresAt' });
+  const { rows, count } = await InvitationRecord.findAndCountAll({
+    where: { workspaceId, ...(query.status ? statusWhere(query.status, new Date()) : {}) },
     include: [{ model: UserRecord, as: 'invitedBy', attributes: ['name'] }],
-    order: [['createdAt', 'DESC']],
+    order: [[column, direction], ['id', direction]],
+    ...pageWindow(query),
+    distinct: true,
   });
-  return rows.map(toDto);
+  return pageOf(query, rows.map((r) => toDto(r)), count);
 }
 
 /**

@@ -1,6 +1,6 @@
 import { Router, type Request } from 'express';
 import { idParamsSchema, fieldErrorsFromZod } from '@shared/schemas';
-import { applyCalibrationSchema, createLabLogSchema, fitRequestSchema, labLogListQuerySchema } from '@shared/schemas/lab-logs';
+import { applyCalibrationSchema, calibrationListQuerySchema, createLabLogSchema, fitRequestSchema, labLogListQuerySchema } from '@shared/schemas/lab-logs';
 import { requireAuth, requireRole } from '../auth/auth.middleware';
 import { AppError } from '../http/errors';
 import { validate, validated } from '../http/validate';
@@ -53,7 +53,7 @@ labLogsRouter.post('/', chemistOnly, upload, async (req, res) => {
 
 labLogsRouter.get('/', validate({ query: labLogListQuerySchema }), async (req, res) => {
   const { query } = validated(res, { query: labLogListQuerySchema });
-  res.json({ labLogs: await listLabLogs(req.user!.workspaceId, query.candidateId) });
+  res.json(await listLabLogs(req.user!.workspaceId, query));
 });
 
 labLogsRouter.get('/:id', validate({ params: idParamsSchema }), async (req, res) => {
@@ -69,8 +69,9 @@ labLogsRouter.post('/:id/fit', chemistOnly, validate({ params: idParamsSchema, b
 export const calibrationsRouter = Router();
 calibrationsRouter.use(requireAuth);
 
-calibrationsRouter.get('/', async (req, res) => {
-  res.json({ calibrations: await listCalibrations(req.user!.workspaceId) });
+calibrationsRouter.get('/', validate({ query: calibrationListQuerySchema }), async (req, res) => {
+  const { query } = validated(res, { query: calibrationListQuerySchema });
+  res.json(await listCalibrations(req.user!.workspaceId, query));
 });
 
 calibrationsRouter.post('/', chemistOnly, validate({ body: applyCalibrationSchema }), async (req, res) => {

@@ -18,7 +18,8 @@ import {
   type ModelCalibrations,
   type RowError,
 } from '@shared/lab-logs';
-import type { ApplyCalibrationRequest, CreateLabLogRequest } from '@shared/schemas/lab-logs';
+import type { ApplyCalibrationRequest, CalibrationListQuery, CreateLabLogRequest, LabLogListQuery } from '@shared/schemas/lab-logs';
+import type { Paged } from '@shared/schemas';
 import { chemistryModelFor } from '@shared/evaluation/chemistry-cache';
 import { componentsOf, lineOf } from '@shared/evaluation/components';
 import { holdBand } from '@shared/evaluation/verify';
@@ -26,6 +27,7 @@ import { packAreaM2, processForFormula, type ChemistryPort, type ThermalComponen
 import type { Brief, Candidate } from '@shared/schemas/briefs';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
+import { pageOf, pageWindow, sortColumn } from '../http/paging';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthUser } from '../auth/session-user';
 import { CandidateRecord } from '../candidates/candidate.model';
@@ -198,15 +200,17 @@ export async function createLabLog(actor: AuthUser, file: { originalname: string
   return toSummary(Object.assign(created, { createdBy: null }));
 }
 
-export async function listLabLogs(workspaceId: number, candidateId?: number): Promise<LabLogSummary[]> {
-  const rows = await LabLogRecord.findAll({
-    where: { workspaceId, ...(candidateId !== undefined ? { candidateId } : {}) },
+export async function listLabLogs(workspaceId: number, query: LabLogListQuery): Promise<Paged<LabLogSummary>> {
+  const { column, direction } = sortColumn(query.sort, { createdAt: 'createdAt', name: 'name' });
+  const { rows, count } = await LabLogRecord.findAndCountAll({
+    where: { workspaceId, ...(query.candidateId !== undefined ? { candidateId: query.candidateId } : {}) },
     attributes: { exclude: ['samples', 'scenario'] },
     include: [{ model: UserRecord, as: 'createdBy', attributes: ['name'] }],
-    order: [['createdAt', 'DESC'], ['id', 'DESC']],
-    limit: 100,
+    order: [[column, direction], ['id', direction]],
+    ...pageWindow(query),
+    distinct: true,
   });
-  return rows.map((r) => toSummary(r as LabLogRecord & { createdBy?: UserRecord | null }));
+  return pageOf(query, rows.map((r) => toSummary(r as LabLogRecord & { createdBy?: UserRecord | null })), count);
 }
 
 async function findLog(workspaceId: number, id: number): Promise<LabLogRecord> {
@@ -375,14 +379,16 @@ export async function applyCalibration(actor: AuthUser, body: ApplyCalibrationRe
   return toCalibrationDto(full as CalibrationRecord & { appliedBy?: UserRecord | null; ingredient?: IngredientRecord | null });
 }
 
-export async function listCalibrations(workspaceId: number): Promise<CalibrationDto[]> {
-  const rows = await CalibrationRecord.findAll({
-    where: { workspaceId },
+export async function listCalibrations(workspaceId: number, query: CalibrationListQuery): Promise<Paged<CalibrationDto>> {
+  const direction = query.sort === 'createdAt' ? 'ASC' : 'DESC';
+  const { rows, count } = await CalibrationRecord.findAndCountAll({
+    where: { workspaceId, ...(query.active !== undefined ? { active: query.active } : {}) },
     include: [{ model: UserRecord, as: 'appliedBy', attributes: ['name'] }, { model: IngredientRecord, as: 'ingredient', attributes: ['name'] }],
-    order: [['createdAt', 'DESC'], ['id', 'DESC']],
-    limit: 200,
+    order: [['createdAt', direction], ['id', direction]],
+    ...pageWindow(query),
+    distinct: true,
   });
-  return rows.map((r) => toCalibrationDto(r as CalibrationRecord & { appliedBy?: UserRecord | null; ingredient?: IngredientRecord | null }));
+  return pageOf(query, rows.map((r) => toCalibrationDto(r as CalibrationRecord & { appliedBy?: UserRecord | null; ingredient?: IngredientRecord | null })), count);
 }
 
 /** The workspace's active calibrations as the optimiser reads them (recorded in each run's data snapshot). */

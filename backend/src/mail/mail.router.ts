@@ -1,6 +1,9 @@
 import { Router } from 'express';
 import { requireAuth, requireRole } from '../auth/auth.middleware';
+import { mailMessageListQuerySchema } from '@shared/schemas';
 import { config } from '../config';
+import { pageOf, pageWindow } from '../http/paging';
+import { validate, validated } from '../http/validate';
 import { MailMessageRecord } from './mail-message.model';
 import './mail.openapi';
 
@@ -8,15 +11,17 @@ export const mailRouter = Router();
 mailRouter.use(requireAuth, requireRole('admin'));
 
 /** The local mail sink's inbox for this workspace (development and tests). */
-mailRouter.get('/', async (req, res) => {
-  const rows = await MailMessageRecord.findAll({
+mailRouter.get('/', validate({ query: mailMessageListQuerySchema }), async (req, res) => {
+  const { query } = validated(res, { query: mailMessageListQuerySchema });
+  const direction = query.sort === 'receivedAt' ? 'ASC' : 'DESC';
+  const { rows, count } = await MailMessageRecord.findAndCountAll({
     where: { workspaceId: req.user!.workspaceId },
-    order: [['receivedAt', 'DESC'], ['id', 'DESC']],
-    limit: 200,
+    order: [['receivedAt', direction], ['id', direction]],
+    ...pageWindow(query),
   });
   res.json({
     enabled: config.mail.sinkEnabled,
-    messages: rows.map((m) => ({
+    ...pageOf(query, rows.map((m) => ({
       id: m.id,
       from: m.fromAddress,
       to: m.toAddresses,
@@ -24,6 +29,6 @@ mailRouter.get('/', async (req, res) => {
       text: m.text,
       html: m.html,
       receivedAt: m.receivedAt.toISOString(),
-    })),
+    })), count),
   });
 });

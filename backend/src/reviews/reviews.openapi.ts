@@ -1,9 +1,9 @@
 import { z } from 'zod';
 import { idParamsSchema } from '@shared/schemas';
-import { candidateHazardsResponseSchema, dossierSchema, reviewDecisionRequestSchema, reviewHistoryResponseSchema, reviewQueueResponseSchema, reviewRecordSchema, reviseRequestSchema, submitRequestSchema, transitionResponseSchema } from '@shared/schemas/reviews';
+import { candidateHazardsResponseSchema, dossierSchema, reviewDecisionRequestSchema, reviewHistoryResponseSchema, reviewQueueQuerySchema, reviewQueueResponseSchema, reviewRecordSchema, reviseRequestSchema, submitRequestSchema, transitionResponseSchema } from '@shared/schemas/reviews';
 import { documentRoute } from '../openapi/registry';
 
-documentRoute({ method: 'get', path: '/reviews', summary: 'Candidates waiting for the signed-in role, and those in or past review', tag: 'reviews', roles: 'any', response: reviewQueueResponseSchema });
+documentRoute({ method: 'get', path: '/reviews', summary: 'A queue, paged: candidates waiting for the signed-in role (?queue=waiting) or all in or past review (?queue=recent)', tag: 'reviews', roles: 'any', query: reviewQueueQuerySchema, response: reviewQueueResponseSchema });
 documentRoute({ method: 'post', path: '/candidates/:id/submit', summary: 'Submit a shortlisted candidate for chemistry review (freezes its composition; 409 from any other state)', tag: 'reviews', roles: ['designer', 'admin'], params: idParamsSchema, body: submitRequestSchema, response: transitionResponseSchema });
 documentRoute({ method: 'post', path: '/candidates/:id/reviews', summary: 'A review decision: chemists in chemistry review, reviewers in regulatory review (comment unless approved; checklist to approve)', tag: 'reviews', roles: ['chemist', 'reviewer'], params: idParamsSchema, body: reviewDecisionRequestSchema, response: transitionResponseSchema.extend({ review: reviewRecordSchema }) });
 documentRoute({ method: 'get', path: '/candidates/:id/reviews', summary: 'Review state, decisions and history of a candidate and its earlier versions', tag: 'reviews', roles: 'any', params: idParamsSchema, response: reviewHistoryResponseSchema });

@@ -1,7 +1,7 @@
 import { Router, type RequestHandler } from 'express';
 import { z } from 'zod';
 import { idParamsSchema } from '@shared/schemas';
-import { reviewDecisionRequestSchema, reviseRequestSchema, submitRequestSchema } from '@shared/schemas/reviews';
+import { reviewDecisionRequestSchema, reviewQueueQuerySchema, reviseRequestSchema, submitRequestSchema } from '@shared/schemas/reviews';
 import { reviewAction, rolesFor, REVIEW_STAGES, type ReviewStage } from '@shared/reviews/state-machine';
 import { requireAuth, requireRole } from '../auth/auth.middleware';
 import { AppError } from '../http/errors';
@@ -71,6 +71,7 @@ candidateReviewsRouter.get('/:id/dossier.pdf', validate({ params: z.object({ id:
 /** Mounted at /api/reviews: what waits for the signed-in role. */
 export const reviewsRouter = Router();
 reviewsRouter.use(requireAuth);
-reviewsRouter.get('/', async (req, res) => {
-  res.json(await reviewQueue(req.user!));
+reviewsRouter.get('/', validate({ query: reviewQueueQuerySchema }), async (req, res) => {
+  const { query } = validated(res, { query: reviewQueueQuerySchema });
+  res.json(await reviewQueue(req.user!, query));
 });

@@ -1,8 +1,8 @@
-import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
+import { Op, QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import type { Brief } from '@shared/schemas/briefs';
 import type { CandidateRecord as CandidateDto } from '@shared/schemas/runs';
-import type { ReviewEvent, ReviewRecord, ReviewStatus, reviewDecisionRequestSchema, reviseRequestSchema } from '@shared/schemas/reviews';
+import type { ReviewEvent, ReviewQueueQuery, ReviewRecord, ReviewStatus, reviewDecisionRequestSchema, reviseRequestSchema } from '@shared/schemas/reviews';
 import type { FieldError, Role } from '@shared/schemas';
 import {
   FROZEN_STATES,
@@ -16,6 +16,7 @@ import { lineOf } from '@shared/evaluation/components';
 import { verifyComposition } from '@shared/evaluation/verify';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
+import { pageOf, pageWindow } from '../http/paging';
 import { recordAudit } from '../audit/audit.service';
 import { AuditEventRecord } from '../audit/audit-event.model';
 import type { AuthUser } from '../auth/session-user';
@@ -319,24 +320,52 @@ export async function reviewHistory(workspaceId: number, id: number): Promise<{ 
   return { status: await reviewStatus(candidate), reviews: reviewDtos, events };
 }
 
-async function queueFor(workspaceId: number, states: ReviewState[], extra: Record<string, unknown> = {}) {
-  const rows = await CandidateRecord.findAll({ where: { workspaceId, state: { [Op.in]: states }, ...extra }, order: [['updatedAt', 'DESC'], ['id', 'DESC']], limit: 100 });
-  const runs = await RunRecord.findAll({ where: { workspaceId, id: { [Op.in]: [...new Set(rows.map((r) => r.runId))] } }, attributes: ['id', 'briefSnapshot'] });
-  const briefName = new Map(runs.map((r) => [r.id, (r.briefSnapshot as Brief).name]));
-  const children = new Set(
-    (await CandidateRecord.findAll({ where: { workspaceId, parentCandidateId: { [Op.in]: rows.map((r) => r.id) } }, attributes: ['parentCandidateId'] })).map((r) => r.parentCandidateId),
+interface QueueRow {
+  id: number;
+  state: ReviewState;
+  revision: number;
+  brief_id: number;
+  brief_name: string | null;
+  set_names: string[] | null;
+  updated_at: Date;
+  total: string;
+}
+
+/**
+ * A page of the workspace's candidates in these states, most recently changed first, in one query:
+ * the brief's name as the run froze it, and no candidate sent back for changes that was already
+ * revised (its revision carries on in the queue).
+ */
+async function queueFor(workspaceId: number, states: ReviewState[], page: { page: number; pageSize: number; sort?: string } = { page: 1, pageSize: 100 }) {
+  const direction = page.sort === 'updatedAt' ? 'ASC' : 'DESC';
+  const replacements = { workspaceId, states, ...pageWindow(page) };
+  const where = `c.workspace_id = :workspaceId AND c.state IN (:states)
+      AND NOT (c.state = 'changes-requested' AND EXISTS (SELECT 1 FROM candidates k WHERE k.workspace_id = c.workspace_id AND k.parent_candidate_id = c.id))`;
+  const rows = await sequelize.query<QueueRow>(
+    `SELECT c.id, c.state, c.revision, c.brief_id, r.brief_snapshot->>'name' AS brief_name, c.data->'setNames' AS set_names, c.updated_at,
+            count(*) OVER () AS total
+       FROM candidates c
+       LEFT JOIN runs r ON r.id = c.run_id AND r.workspace_id = c.workspace_id
+      WHERE ${where}
+      ORDER BY c.updated_at ${direction}, c.id ${direction}
+      LIMIT :limit OFFSET :offset`,
+    { replacements, type: QueryTypes.SELECT },
   );
-  return rows
-    .filter((r) => !(r.state === 'changes-requested' && children.has(r.id)))
-    .map((r) => ({
-      candidateId: r.id,
-      state: r.state as ReviewState,
-      revision: r.revision,
-      briefId: r.briefId,
-      briefName: briefName.get(r.runId) ?? `Brief ${r.briefId}`,
-      setNames: r.data.setNames,
-      updatedAt: r.updatedAt.toISOString(),
-    }));
+  let total = rows[0] ? Number(rows[0].total) : 0;
+  if (rows.length === 0 && page.page > 1) {
+    const [counted] = await sequelize.query<{ n: string }>(`SELECT count(*) AS n FROM candidates c WHERE ${where}`, { replacements, type: QueryTypes.SELECT });
+    total = Number(counted?.n ?? 0);
+  }
+  const items = rows.map((r) => ({
+    candidateId: r.id,
+    state: r.state,
+    revision: r.revision,
+    briefId: r.brief_id,
+    briefName: r.brief_name ?? `Brief ${r.brief_id}`,
+    setNames: r.set_names ?? [],
+    updatedAt: r.updated_at.toISOString(),
+  }));
+  return pageOf(page, items, total);
 }
 
 /** The states a role acts on. */
@@ -347,31 +376,30 @@ export function statesWaitingOn(role: Role): ReviewState[] {
 }
 
 /** What waits for the signed-in member's role, and what is in review for everyone to follow. */
-export async function reviewQueue(user: AuthUser) {
-  const waiting = await queueFor(user.workspaceId, statesWaitingOn(user.role));
-  const recent = await queueFor(user.workspaceId, ['in-chemistry-review', 'in-regulatory-review', 'approved', 'changes-requested', 'rejected']);
-  return { role: user.role, waiting, recent: recent.slice(0, 50) };
+export async function reviewQueue(user: AuthUser, query: ReviewQueueQuery) {
+  const states: ReviewState[] = query.queue === 'waiting' ? statesWaitingOn(user.role) : ['in-chemistry-review', 'in-regulatory-review', 'approved', 'changes-requested', 'rejected'];
+  return { role: user.role, queue: query.queue, ...(await queueFor(user.workspaceId, states, query)) };
 }
 
 registerWaitingProvider(['chemist'], async (user) => {
-  const items = await queueFor(user.workspaceId, ['in-chemistry-review']);
+  const { items, total } = await queueFor(user.workspaceId, ['in-chemistry-review']);
   return {
     items: items.map((i) => ({ kind: 'chemistry-review', title: `Chemistry review: ${i.setNames.join(' + ')} (revision ${i.revision})`, detail: `For the brief “${i.briefName}”.`, href: `/candidates/${i.candidateId}` })),
-    counts: { inChemistryReview: items.length },
+    counts: { inChemistryReview: total },
   };
 });
 registerWaitingProvider(['reviewer'], async (user) => {
-  const items = await queueFor(user.workspaceId, ['in-regulatory-review']);
+  const { items, total } = await queueFor(user.workspaceId, ['in-regulatory-review']);
   return {
     items: items.map((i) => ({ kind: 'regulatory-review', title: `Regulatory review: ${i.setNames.join(' + ')} (revision ${i.revision})`, detail: `For the brief “${i.briefName}”; chemistry approved.`, href: `/candidates/${i.candidateId}` })),
-    counts: { inRegulatoryReview: items.length },
+    counts: { inRegulatoryReview: total },
   };
 });
 registerWaitingProvider(['designer'], async (user) => {
-  const items = await queueFor(user.workspaceId, ['changes-requested']);
+  const { items, total } = await queueFor(user.workspaceId, ['changes-requested']);
   return {
     items: items.map((i) => ({ kind: 'changes-requested', title: `Changes requested: ${i.setNames.join(' + ')} (revision ${i.revision})`, detail: `For the brief “${i.briefName}”; revise it and submit again.`, href: `/candidates/${i.candidateId}` })),
-    counts: { changesRequested: items.length },
+    counts: { changesRequested: total },
   };
 });
 

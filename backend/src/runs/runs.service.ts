@@ -1,7 +1,9 @@
 import type { OptimiserIngredient } from '@shared/optimiser/types';
-import type { CandidateRecord as CandidateDto, RunDetail, RunSummary } from '@shared/schemas/runs';
+import type { CandidateRecord as CandidateDto, RunDetail, RunListQuery, RunSummary } from '@shared/schemas/runs';
+import type { Paged } from '@shared/schemas';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
+import { pageOf, pageWindow, sortColumn } from '../http/paging';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthUser } from '../auth/session-user';
 import { UserRecord } from '../users/user.model';
@@ -88,16 +90,18 @@ export async function createRun(actor: AuthUser, briefId: number): Promise<numbe
 
 const summaryAttributes = { exclude: ['dataSnapshot', 'result', 'briefSnapshot'] as string[] };
 
-export async function listRuns(workspaceId: number, briefId: number): Promise<RunSummary[]> {
+export async function listRuns(workspaceId: number, briefId: number, query: RunListQuery): Promise<Paged<RunSummary>> {
   await findBrief(workspaceId, briefId);
-  const runs = await RunRecord.findAll({
-    where: { workspaceId, briefId },
+  const { column, direction } = sortColumn(query.sort, { createdAt: 'createdAt', status: 'status' });
+  const { rows, count } = await RunRecord.findAndCountAll({
+    where: { workspaceId, briefId, ...(query.status ? { status: query.status } : {}) },
     attributes: summaryAttributes,
     include: [{ model: UserRecord, as: 'createdBy', attributes: ['name'] }],
-    order: [['createdAt', 'DESC'], ['id', 'DESC']],
-    limit: 50,
+    order: [[column, direction], ['createdAt', 'DESC'], ['id', 'DESC']],
+    ...pageWindow(query),
+    distinct: true,
   });
-  return runs.map(toRunSummary);
+  return pageOf(query, rows.map(toRunSummary), count);
 }
 
 async function findRun(workspaceId: number, id: number): Promise<RunRecord> {

@@ -4,6 +4,7 @@ import type { ChemistryLibrary, DilutionSeries, EutecticPoint, FreezingPointSeri
 import type { CreateSpeciesRequest, Species, SpeciesListQuery, UpdateSpeciesRequest } from '@shared/schemas';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
+import { likePattern, pageOf, pageWindow, sortColumn } from '../http/paging';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthUser } from '../auth/session-user';
 import { SpeciesRow } from './species.model';
@@ -55,10 +56,6 @@ function visibleTo(workspaceId: number): WhereOptions {
   };
 }
 
-function likePattern(q: string): string {
-  return `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-}
-
 export async function listSpecies(workspaceId: number, query: SpeciesListQuery) {
   const and: WhereOptions[] = [visibleTo(workspaceId)];
   if (query.q) {
@@ -68,13 +65,13 @@ export async function listSpecies(workspaceId: number, query: SpeciesListQuery) 
   if (query.phase) and.push({ phase: query.phase });
   if (query.scope === 'reference') and.push({ workspaceId: null });
   if (query.scope === 'workspace') and.push({ workspaceId: { [Op.ne]: null } });
+  const { column, direction } = sortColumn(query.sort, { formula: 'formula', name: 'name', phase: 'phase', updatedAt: 'updatedAt' });
   const { rows, count } = await SpeciesRow.findAndCountAll({
     where: { [Op.and]: and },
-    order: [['formula', 'ASC'], ['phase', 'ASC'], ['id', 'ASC']],
-    limit: query.pageSize,
-    offset: (query.page - 1) * query.pageSize,
+    order: [[column, direction], ['formula', 'ASC'], ['phase', 'ASC'], ['id', 'ASC']],
+    ...pageWindow(query),
   });
-  return { species: rows.map(toSpeciesDto), total: count, page: query.page, pageSize: query.pageSize };
+  return pageOf(query, rows.map(toSpeciesDto), count);
 }
 
 /** The formula as stored: phase tag removed, hydrate separators written as `·`, charge kept. */

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { idParamsSchema, updateUserRequestSchema } from '@shared/schemas';
+import { idParamsSchema, updateUserRequestSchema, userListQuerySchema } from '@shared/schemas';
 import { requireAuth, requireRole } from '../auth/auth.middleware';
 import { validate, validated } from '../http/validate';
 import { listUsers, updateUser } from './users.service';
@@ -8,8 +8,9 @@ import './users.openapi';
 export const usersRouter = Router();
 usersRouter.use(requireAuth, requireRole('admin'));
 
-usersRouter.get('/', async (req, res) => {
-  res.json({ users: await listUsers(req.user!.workspaceId) });
+usersRouter.get('/', validate({ query: userListQuerySchema }), async (req, res) => {
+  const { query } = validated(res, { query: userListQuerySchema });
+  res.json(await listUsers(req.user!.workspaceId, query));
 });
 
 usersRouter.patch('/:id', validate({ params: idParamsSchema, body: updateUserRequestSchema }), async (req, res) => {

@@ -1,6 +1,8 @@
-import type { UpdateUserRequest, User } from '@shared/schemas';
+import { Op, type WhereOptions } from 'sequelize';
+import type { Paged, UpdateUserRequest, User, UserListQuery } from '@shared/schemas';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
+import { likePattern, pageOf, pageWindow, sortColumn } from '../http/paging';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthUser } from '../auth/session-user';
 import { ReviewRecordModel } from '../reviews/review.model';
@@ -19,9 +21,21 @@ export function toUserDto(user: UserRecord): User {
   };
 }
 
-export async function listUsers(workspaceId: number): Promise<User[]> {
-  const users = await UserRecord.findAll({ where: { workspaceId }, order: [['name', 'ASC']] });
-  return users.map(toUserDto);
+export async function listUsers(workspaceId: number, query: UserListQuery): Promise<Paged<User>> {
+  const and: WhereOptions[] = [{ workspaceId }];
+  if (query.q) {
+    const p = likePattern(query.q);
+    and.push({ [Op.or]: [{ name: { [Op.iLike]: p } }, { email: { [Op.iLike]: p } }] });
+  }
+  if (query.role) and.push({ role: query.role });
+  if (query.disabled !== undefined) and.push({ disabled: query.disabled });
+  const { column, direction } = sortColumn(query.sort, { name: 'name', email: 'email', role: 'role', createdAt: 'createdAt', lastLoginAt: 'lastLoginAt' });
+  const { rows, count } = await UserRecord.findAndCountAll({
+    where: { [Op.and]: and },
+    order: [[column, direction === 'DESC' ? 'DESC NULLS LAST' : 'ASC NULLS FIRST'], ['name', 'ASC'], ['id', 'ASC']],
+    ...pageWindow(query),
+  });
+  return pageOf(query, rows.map(toUserDto), count);
 }
 
 /** Changes a member's role or disables them. Disabling bumps the token version, ending their sessions. */

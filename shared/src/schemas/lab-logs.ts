@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { textSchema, MAX_ID } from './common';
 import { contactCaseSchema } from './briefs';
+import { idFilterSchema, pagedQuerySchema } from './common';
 
 /** Payloads of /api/lab-logs and /api/calibrations. */
 
@@ -49,9 +50,17 @@ export const createLabLogSchema = z
   });
 export type CreateLabLogRequest = z.infer<typeof createLabLogSchema>;
 
-export const labLogListQuerySchema = z.object({
-  candidateId: z.coerce.number().int().positive().max(MAX_ID, `must be at most ${MAX_ID}`).optional(),
+/** GET /api/lab-logs: a page of the workspace's lab logs (of one candidate when asked), newest first unless asked. */
+export const labLogListQuerySchema = pagedQuerySchema(['createdAt', 'name'], '-createdAt').extend({
+  candidateId: idFilterSchema.optional(),
 });
+export type LabLogListQuery = z.output<typeof labLogListQuerySchema>;
+
+/** GET /api/calibrations: a page of the workspace's calibrations, active and retired unless `active` is given. */
+export const calibrationListQuerySchema = pagedQuerySchema(['createdAt'], '-createdAt').extend({
+  active: z.enum(['true', 'false'], { error: 'must be true or false' }).transform((v) => v === 'true').optional(),
+});
+export type CalibrationListQuery = z.output<typeof calibrationListQuerySchema>;
 
 export const fitRequestSchema = z.object({
   fit: z.array(z.enum(['ua', 'enthalpy', 'rate'])).min(1).max(3).default(['ua', 'enthalpy', 'rate']),

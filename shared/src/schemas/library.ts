@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { FormulaError, parseFormula } from '../chemistry/formula';
 import { ingredientProcessSchema } from '../thermal/process';
-import { pagingQuerySchema, type FieldError, textSchema, MAX_ID } from './common';
+import { paged, pagedQuerySchema, searchTextSchema, textSchema, MAX_ID, type FieldError } from './common';
 
 // Species data and the ingredient library (DESIGN.md §3, §5).
 
@@ -57,18 +57,13 @@ export const speciesSchema = z.object({
 });
 export type Species = z.infer<typeof speciesSchema>;
 
-export const speciesListQuerySchema = pagingQuerySchema.extend({
-  q: textSchema().trim().max(100, 'must be at most 100 characters').optional(),
+export const speciesListQuerySchema = pagedQuerySchema(['formula', 'name', 'phase', 'updatedAt'], 'formula').extend({
+  q: searchTextSchema.optional(),
   phase: phaseSchema.optional(),
   scope: z.enum(['reference', 'workspace']).optional(),
 });
 export type SpeciesListQuery = z.infer<typeof speciesListQuerySchema>;
-export const speciesListResponseSchema = z.object({
-  species: z.array(speciesSchema),
-  total: z.number(),
-  page: z.number(),
-  pageSize: z.number(),
-});
+export const speciesListResponseSchema = paged(speciesSchema);
 
 export const createSpeciesRequestSchema = z.object({
   formula: formulaSchema,
@@ -263,19 +258,14 @@ export const ingredientSchema = z.object({
 });
 export type Ingredient = z.infer<typeof ingredientSchema>;
 
-export const INGREDIENT_SORTS = ['name', '-name', 'costPerKg', '-costPerKg', 'role', '-role', 'updatedAt', '-updatedAt'] as const;
-export const ingredientListQuerySchema = pagingQuerySchema.extend({
-  q: textSchema().trim().max(100, 'must be at most 100 characters').optional(),
+export const INGREDIENT_SORT_KEYS = ['name', 'costPerKg', 'role', 'updatedAt'] as const;
+export const INGREDIENT_SORTS = INGREDIENT_SORT_KEYS.flatMap((k) => [k, `-${k}` as const]);
+export const ingredientListQuerySchema = pagedQuerySchema(INGREDIENT_SORT_KEYS, 'name').extend({
+  q: searchTextSchema.optional(),
   role: ingredientRoleSchema.optional(),
-  sort: z.enum(INGREDIENT_SORTS, { error: `must be one of ${INGREDIENT_SORTS.join(', ')}` }).default('name'),
 });
 export type IngredientListQuery = z.infer<typeof ingredientListQuerySchema>;
-export const ingredientListResponseSchema = z.object({
-  ingredients: z.array(ingredientSchema),
-  total: z.number(),
-  page: z.number(),
-  pageSize: z.number(),
-});
+export const ingredientListResponseSchema = paged(ingredientSchema);
 
 export const deleteIngredientQuerySchema = z.object({
   /** When given, the delete is refused (409) if the ingredient changed since this version. */
@@ -291,7 +281,9 @@ export const auditEventSchema = z.object({
   after: z.unknown().nullable(),
   detail: z.record(z.string(), z.unknown()),
 });
-export const ingredientHistoryResponseSchema = z.object({ events: z.array(auditEventSchema) });
+/** GET /api/ingredients/:id/history: a page of its audit events, oldest first unless asked. */
+export const ingredientHistoryQuerySchema = pagedQuerySchema(['at'], 'at');
+export const ingredientHistoryResponseSchema = paged(auditEventSchema);
 
 /** Columns of the ingredient CSV (import and export), in order. */
 export const INGREDIENT_CSV_COLUMNS = [
@@ -335,5 +327,7 @@ export const attachmentSchema = z.object({
   createdAt: z.string(),
 });
 export type Attachment = z.infer<typeof attachmentSchema>;
-export const attachmentListResponseSchema = z.object({ attachments: z.array(attachmentSchema) });
+/** GET /api/ingredients/:id/attachments: a page of its attachments, newest first unless asked. */
+export const attachmentListQuerySchema = pagedQuerySchema(['createdAt', 'filename'], '-createdAt');
+export const attachmentListResponseSchema = paged(attachmentSchema);
 export const ingredientAttachmentParamsSchema = z.object({ id: z.coerce.number().int('must be a whole number').positive('must be a positive id').max(MAX_ID, `must be at most ${MAX_ID}`) });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { paged, pagedQuerySchema } from './common';
 
 /** A message the local mail sink received over SMTP (development and tests only). */
 export const mailMessageSchema = z.object({
@@ -11,7 +12,7 @@ export const mailMessageSchema = z.object({
   receivedAt: z.string(),
 });
 export type MailMessage = z.infer<typeof mailMessageSchema>;
-export const mailMessageListResponseSchema = z.object({
-  enabled: z.boolean(),
-  messages: z.array(mailMessageSchema),
-});
+/** GET /api/mail-messages: a page of the sink's messages for this workspace, newest first unless asked. */
+export const mailMessageListQuerySchema = pagedQuerySchema(['receivedAt'], '-receivedAt');
+/** The page, and whether the local sink runs at all. */
+export const mailMessageListResponseSchema = paged(mailMessageSchema).extend({ enabled: z.boolean() });

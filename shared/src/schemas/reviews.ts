@@ -3,6 +3,7 @@ import { textSchema, MAX_ID } from './common';
 import { REVIEW_STAGES, REVIEW_STATES, REVIEW_VERDICTS } from '../reviews/state-machine';
 import { candidateHazardsSchema, ingredientHazardDataSchema, labelElementsSchema, hazardNoteSchema } from './hazards';
 import { candidateRecordSchema } from './runs';
+import { paged, pagedQuerySchema } from './common';
 
 export const reviewStateSchema = z.enum(REVIEW_STATES);
 export const reviewStageSchema = z.enum(REVIEW_STAGES, { error: 'must be chemistry or regulatory' });
@@ -153,7 +154,16 @@ export const reviewQueueItemSchema = z.object({
   setNames: z.array(z.string()),
   updatedAt: z.string(),
 });
-export const reviewQueueResponseSchema = z.object({ role: z.string(), waiting: z.array(reviewQueueItemSchema), recent: z.array(reviewQueueItemSchema) });
+/**
+ * GET /api/reviews: one queue, paged, most recently changed first. `waiting` is what waits for the
+ * signed-in role; `recent` is every candidate in or past review, for everyone to follow.
+ */
+export const REVIEW_QUEUES = ['waiting', 'recent'] as const;
+export const reviewQueueQuerySchema = pagedQuerySchema(['updatedAt'], '-updatedAt').extend({
+  queue: z.enum(REVIEW_QUEUES, { error: `must be one of ${REVIEW_QUEUES.join(', ')}` }).default('waiting'),
+});
+export type ReviewQueueQuery = z.output<typeof reviewQueueQuerySchema>;
+export const reviewQueueResponseSchema = paged(reviewQueueItemSchema).extend({ role: z.string(), queue: z.enum(REVIEW_QUEUES) });
 export type ReviewQueueResponse = z.infer<typeof reviewQueueResponseSchema>;
 
 // ---- hazard data on ingredients ----

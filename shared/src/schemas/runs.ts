@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { MAX_ID } from './common';
 import { briefSchema, candidateSchema, infeasibleSetSchema } from './briefs';
+import { idFilterSchema, paged, pagedQuerySchema, searchTextSchema } from './common';
 
 /**
  * A complete brief (the output of briefSchema) inside a response. Declared as an object for the
@@ -26,7 +27,14 @@ export const briefRecordSchema = z.object({
     .nullable(),
 });
 export type BriefRecord = z.infer<typeof briefRecordSchema>;
-export const briefListResponseSchema = z.object({ briefs: z.array(briefRecordSchema) });
+/** GET /api/briefs: a page of the workspace's briefs, searched by name, filtered by pack type. */
+export const BRIEF_SORT_KEYS = ['name', 'updatedAt', 'createdAt'] as const;
+export const briefListQuerySchema = pagedQuerySchema(BRIEF_SORT_KEYS, '-updatedAt').extend({
+  q: searchTextSchema.optional(),
+  packType: z.enum(['cold', 'warm'], { error: 'must be cold or warm' }).optional(),
+});
+export type BriefListQuery = z.output<typeof briefListQuerySchema>;
+export const briefListResponseSchema = paged(briefRecordSchema);
 
 export const RUN_STATUSES = ['queued', 'running', 'succeeded', 'failed', 'cancelled'] as const;
 export const runStatusSchema = z.enum(RUN_STATUSES);
@@ -77,7 +85,20 @@ export const runDetailSchema = runSummarySchema.extend({
   dataSnapshot: z.object({ ingredients: z.array(z.object({ id: z.string(), name: z.string(), version: z.number() })), speciesCount: z.number(), calibrations: z.record(z.string(), z.unknown()).optional() }),
 });
 export type RunDetail = z.infer<typeof runDetailSchema>;
-export const runListResponseSchema = z.object({ runs: z.array(runSummarySchema) });
+/** GET /api/briefs/:id/runs: a page of the brief's runs, newest first unless asked. */
+export const runListQuerySchema = pagedQuerySchema(['createdAt', 'status'], '-createdAt').extend({
+  status: runStatusSchema.optional(),
+});
+export type RunListQuery = z.output<typeof runListQuerySchema>;
+export const runListResponseSchema = paged(runSummarySchema);
+
+/** GET /api/candidates: a page of the workspace's candidates in one state (shortlisted unless asked). */
+export const candidateListQuerySchema = pagedQuerySchema(['updatedAt', 'rank', 'createdAt'], '-updatedAt').extend({
+  state: z.string().trim().min(1).max(40).regex(/^[a-z-]+$/, 'must be a candidate state such as shortlisted').default('shortlisted'),
+  briefId: idFilterSchema.optional(),
+});
+export type CandidateListQuery = z.output<typeof candidateListQuerySchema>;
+export const candidateListResponseSchema = paged(candidateRecordSchema);
 export const createRunResponseSchema = z.object({ runId: z.number() });
 export const candidateResponseSchema = z.object({ candidate: candidateRecordSchema, currency: z.string(), brief: briefSpecSchema });
 export const briefIdParamsSchema = z.object({ id: z.coerce.number().int('must be a whole number').positive('must be a positive id').max(MAX_ID, `must be at most ${MAX_ID}`) });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { emailSchema, passwordSchema, roleSchema, textSchema, MAX_ID } from './common';
+import { emailSchema, paged, pagedQuerySchema, passwordSchema, roleSchema, searchTextSchema, textSchema, MAX_ID } from './common';
 
 export const userSchema = z.object({
   id: z.number(),
@@ -12,7 +12,14 @@ export const userSchema = z.object({
   version: z.number(),
 });
 export type User = z.infer<typeof userSchema>;
-export const userListResponseSchema = z.object({ users: z.array(userSchema) });
+/** GET /api/users: a page of the workspace's members, searched by name or address, filtered by role. */
+export const userListQuerySchema = pagedQuerySchema(['name', 'email', 'role', 'createdAt', 'lastLoginAt'], 'name').extend({
+  q: searchTextSchema.optional(),
+  role: roleSchema.optional(),
+  disabled: z.enum(['true', 'false'], { error: 'must be true or false' }).transform((v) => v === 'true').optional(),
+});
+export type UserListQuery = z.output<typeof userListQuerySchema>;
+export const userListResponseSchema = paged(userSchema);
 
 /** Change a member's role or disable them; `version` guards against a stale edit (409). */
 export const updateUserRequestSchema = z
@@ -41,7 +48,13 @@ export const invitationSchema = z.object({
   createdAt: z.string(),
 });
 export type Invitation = z.infer<typeof invitationSchema>;
-export const invitationListResponseSchema = z.object({ invitations: z.array(invitationSchema) });
+export const INVITATION_STATUSES = ['pending', 'accepted', 'expired', 'revoked'] as const;
+/** GET /api/invitations: a page of the workspace's invitations, newest first unless asked, by status. */
+export const invitationListQuerySchema = pagedQuerySchema(['createdAt', 'email', 'expiresAt'], '-createdAt').extend({
+  status: z.enum(INVITATION_STATUSES, { error: `must be one of ${INVITATION_STATUSES.join(', ')}` }).optional(),
+});
+export type InvitationListQuery = z.output<typeof invitationListQuerySchema>;
+export const invitationListResponseSchema = paged(invitationSchema);
 /** `resent`: a pending invitation to this address in this workspace was replaced; its link no longer works. */
 export const createInvitationResponseSchema = z.object({ invitation: invitationSchema, resent: z.boolean() });
 export type CreateInvitationResponse = z.infer<typeof createInvitationResponseSchema>;

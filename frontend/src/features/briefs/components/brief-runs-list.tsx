@@ -2,11 +2,12 @@ import { Link } from 'react-router';
 import { RunStatusBadge, isRunActive } from '@/components/status/run-status-badge';
 import { EmptyState } from '@/components/ui/empty-state';
 import { QueryError } from '@/components/ui/query-error';
+import { Pager, usePageState } from '@/components/ui/pager';
 import { Loading } from '@/components/ui/spinner';
 import { formatDateTime, formatDuration, formatNumber } from '@/lib/format';
 import { useBriefRuns } from '../api/get-brief-runs';
 
-/** The brief's runs, newest first: status, when, who, how far and how long. */
+/** The brief's runs, newest first, a page at a time: status, when, who, how far and how long. */
 export function BriefRunsList({
   briefId,
   currentVersion,
@@ -17,11 +18,13 @@ export function BriefRunsList({
   /** The latest run with its candidate count (the list itself carries none). */
   lastRun: { id: number; candidates: number } | null;
 }) {
-  const runs = useBriefRuns(briefId);
+  const paging = usePageState(10);
+  const runs = useBriefRuns(briefId, { page: paging.page, pageSize: paging.pageSize });
   if (runs.isPending) return <Loading label="Loading the runs…" />;
   if (runs.isError) return <QueryError title="The runs could not be loaded" error={runs.error} onRetry={() => void runs.refetch()} retrying={runs.isFetching} />;
-  if (runs.data.length === 0) return <EmptyState title="Not run yet">Run the optimiser to get ranked candidates for this brief.</EmptyState>;
+  if (runs.data.total === 0) return <EmptyState title="Not run yet">Run the optimiser to get ranked candidates for this brief.</EmptyState>;
   return (
+    <div className="flex flex-col gap-3">
     <div className="-mx-5 overflow-x-auto">
       <table className="w-full min-w-[40rem] text-left text-small">
         <caption className="sr-only">Runs of this brief</caption>
@@ -37,7 +40,7 @@ export function BriefRunsList({
           </tr>
         </thead>
         <tbody className="divide-y divide-ink-100">
-          {runs.data.map((r) => (
+          {runs.data.items.map((r) => (
             <tr key={r.id}>
               <th scope="row" className="px-5 py-2">
                 <Link to={`/runs/${r.id}`} className="font-bold text-frost-700 hover:underline">
@@ -73,6 +76,8 @@ export function BriefRunsList({
           ))}
         </tbody>
       </table>
+    </div>
+    <Pager noun="run" label="Pages of the runs" page={paging.page} pageSize={paging.pageSize} total={runs.data.total} onPageChange={paging.setPage} pageSizes={[10, 25, 50]} onPageSizeChange={paging.setPageSize} />
     </div>
   );
 }

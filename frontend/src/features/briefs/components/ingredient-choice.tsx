@@ -25,7 +25,7 @@ export function IngredientChoice({
   const ingredients = useBriefIngredients();
   const [filter, setFilter] = useState('');
   const rows = useMemo(() => {
-    const list = ingredients.data?.ingredients ?? [];
+    const list = ingredients.data?.items ?? [];
     const q = filter.trim().toLowerCase();
     return q ? list.filter((i) => `${i.name} ${i.grade}`.toLowerCase().includes(q)) : list;
   }, [ingredients.data, filter]);
@@ -33,7 +33,7 @@ export function IngredientChoice({
   if (ingredients.isPending) return <Loading label="Loading the ingredient library…" />;
   if (ingredients.isError)
     return <QueryError title="The ingredient library could not be loaded" error={ingredients.error} onRetry={() => void ingredients.refetch()} />;
-  if (ingredients.data.ingredients.length === 0)
+  if (ingredients.data.items.length === 0)
     return <EmptyState title="The ingredient library is empty">Chemists add ingredients in the ingredient library.</EmptyState>;
 
   const allowedSet = new Set(allowed);

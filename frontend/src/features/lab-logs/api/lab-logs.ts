@@ -1,4 +1,5 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { Paged } from '@shared/schemas';
 import type { ApplyCalibrationRequest, CreateLabLogRequest } from '@shared/schemas/lab-logs';
 import type { CalibrationFit, ColumnMapping, LogColumn, RowError } from '@shared/lab-logs';
 import { z } from 'zod';
@@ -88,14 +89,29 @@ export const labLogKeys = {
   calibrations: ['calibrations'] as const,
 };
 
-export const labLogsQueryOptions = (candidateId?: number) =>
-  queryOptions({ queryKey: labLogKeys.list(candidateId), queryFn: () => api.get('/api/lab-logs', { query: { candidateId }, schema: answer<{ labLogs: LabLogSummary[] }>() }) });
+export interface LabLogPageParams {
+  page: number;
+  pageSize: number;
+}
+const FIRST_PAGE: LabLogPageParams = { page: 1, pageSize: 20 };
+
+/** One page of the workspace's lab logs (of one candidate when given), newest first. */
+export const labLogsQueryOptions = (candidateId?: number, params: LabLogPageParams = FIRST_PAGE) =>
+  queryOptions({
+    queryKey: [...labLogKeys.list(candidateId), params] as const,
+    queryFn: () => api.get('/api/lab-logs', { query: { candidateId, ...params }, schema: answer<Paged<LabLogSummary>>() }),
+    placeholderData: keepPreviousData,
+  });
 export const labLogQueryOptions = (id: number) =>
   queryOptions({ queryKey: labLogKeys.detail(id), queryFn: () => api.get(`/api/lab-logs/${id}`, { schema: answer<LabLogDetail>() }) });
+/** The active calibrations of the workspace (at most one per contact case and ingredient, so one page of 200 holds them). */
 export const calibrationsQueryOptions = () =>
-  queryOptions({ queryKey: labLogKeys.calibrations, queryFn: () => api.get('/api/calibrations', { schema: answer<{ calibrations: Calibration[] }>() }) });
+  queryOptions({
+    queryKey: [...labLogKeys.calibrations, { active: true }] as const,
+    queryFn: () => api.get('/api/calibrations', { query: { active: true, pageSize: 200 }, schema: answer<Paged<Calibration>>() }),
+  });
 
-export const useLabLogs = (candidateId?: number) => useQuery(labLogsQueryOptions(candidateId));
+export const useLabLogs = (candidateId?: number, params?: LabLogPageParams) => useQuery(labLogsQueryOptions(candidateId, params));
 export const useLabLog = (id: number) => useQuery(labLogQueryOptions(id));
 export const useCalibrations = () => useQuery(calibrationsQueryOptions());
 
@@ -138,6 +154,6 @@ export type IngredientOption = { id: number; name: string; grade: string | null;
 export const mixtureIngredientsQueryOptions = () =>
   queryOptions({
     queryKey: ['lab-logs', 'ingredient-options'] as const,
-    queryFn: () => api.get('/api/ingredients', { query: { pageSize: 100, sort: 'name' }, schema: answer<{ ingredients: IngredientOption[] }>() }),
+    queryFn: () => api.get('/api/ingredients', { query: { pageSize: 100, sort: 'name' }, schema: answer<Paged<IngredientOption>>() }),
   });
 export const useMixtureIngredients = () => useQuery(mixtureIngredientsQueryOptions());

@@ -150,9 +150,9 @@ function ApplyCalibration({ labLogId, fit, contact, componentKeys }: { labLogId:
   const apply = useApplyCalibration();
   const calibrations = useCalibrations();
   const ingredients = useMixtureIngredients();
-  const inMixture = (ingredients.data?.ingredients ?? []).filter((i) => componentKeys.includes(String(i.id)) && i.role === 'active');
+  const inMixture = (ingredients.data?.items ?? []).filter((i) => componentKeys.includes(String(i.id)) && i.role === 'active');
   const [target, setTarget] = useState<string>('contact');
-  const mine = (calibrations.data?.calibrations ?? []).filter((c) => c.labLogId === labLogId && c.active);
+  const mine = (calibrations.data?.items ?? []).filter((c) => c.labLogId === labLogId && c.active);
   const submit = () => {
     if (target === 'contact') apply.mutate({ labLogId, scope: 'contact' });
     else apply.mutate({ labLogId, scope: 'ingredient', ingredientId: Number(target) });

@@ -1,14 +1,16 @@
 import { Link } from 'react-router';
 import { Card, CardBody, CardHeader } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
+import { Pager, usePageState } from '@/components/ui/pager';
 import { Loading } from '@/components/ui/spinner';
 import { QueryError } from '@/components/ui/query-error';
 import { Badge } from '@/components/ui/badge';
 import { useLabLogs } from '../api/lab-logs';
 
-/** The workspace's lab logs (or one candidate's), newest first. */
+/** The workspace's lab logs (or one candidate's), newest first, a page at a time. */
 export function LabLogList({ candidateId }: { candidateId?: number }) {
-  const q = useLabLogs(candidateId);
+  const paging = usePageState(20);
+  const q = useLabLogs(candidateId, { page: paging.page, pageSize: paging.pageSize });
   return (
     <Card>
       <CardHeader title={candidateId ? 'Lab logs of this candidate' : 'Lab logs'} description="Recorded temperature curves, each compared with the model's prediction." />
@@ -17,9 +19,10 @@ export function LabLogList({ candidateId }: { candidateId?: number }) {
           <Loading label="Loading lab logs…" />
         ) : q.isError ? (
           <QueryError error={q.error} onRetry={() => void q.refetch()} />
-        ) : q.data.labLogs.length === 0 ? (
+        ) : q.data.total === 0 ? (
           <EmptyState title="No lab logs yet">Upload a logger export to compare it with the prediction and calibrate the model.</EmptyState>
         ) : (
+          <div className="flex flex-col gap-3">
           <table className="w-full text-left text-small">
             <caption className="sr-only">Lab logs</caption>
             <thead className="text-caption font-bold text-ink-600">
@@ -32,7 +35,7 @@ export function LabLogList({ candidateId }: { candidateId?: number }) {
               </tr>
             </thead>
             <tbody className="divide-y divide-ink-100">
-              {q.data.labLogs.map((l) => (
+              {q.data.items.map((l) => (
                 <tr key={l.id}>
                   <th scope="row" className="py-1.5 pr-4 font-semibold">
                     <Link to={`/lab-logs/${l.id}`} className="text-frost-700 underline-offset-2 hover:underline">
@@ -48,6 +51,8 @@ export function LabLogList({ candidateId }: { candidateId?: number }) {
               ))}
             </tbody>
           </table>
+          <Pager noun="lab log" label="Pages of the lab logs" page={paging.page} pageSize={paging.pageSize} total={q.data.total} onPageChange={paging.setPage} pageSizes={[20, 50, 100]} onPageSizeChange={paging.setPageSize} />
+          </div>
         )}
       </CardBody>
     </Card>

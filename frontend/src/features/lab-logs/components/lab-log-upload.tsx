@@ -200,7 +200,7 @@ export function LabLogUpload({ candidateId }: { candidateId?: number }) {
                   <div key={i} className="grid gap-3 sm:grid-cols-[2fr_1fr]">
                     <SelectField label={`Component ${i + 1}`} value={r.source} onChange={(e) => { const v = e.currentTarget.value; setRows((rs) => rs.map((x, k) => (k === i ? { ...x, source: v } : x))); }}>
                       <option value="">—</option>
-                      {(ingredients.data?.ingredients ?? []).map((ing) => (
+                      {(ingredients.data?.items ?? []).map((ing) => (
                         <option key={ing.id} value={`ing:${ing.id}`}>
                           {ing.grade ? `${ing.name} (${ing.grade})` : ing.name}
                         </option>

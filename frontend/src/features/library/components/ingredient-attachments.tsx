@@ -1,3 +1,4 @@
+import { Pager, usePageState } from '@/components/ui/pager';
 import { useRef, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -18,7 +19,8 @@ function formatSize(bytes: number): string {
 
 /** Safety data sheets (PDF) of an ingredient: list, download, and upload for writers. */
 export function IngredientAttachments({ ingredientId, canWrite }: { ingredientId: number; canWrite: boolean }) {
-  const attachments = useIngredientAttachments(ingredientId);
+  const paging = usePageState(10);
+  const attachments = useIngredientAttachments(ingredientId, { page: paging.page, pageSize: paging.pageSize });
   const upload = useUploadAttachment(ingredientId);
   const input = useRef<HTMLInputElement>(null);
   const [file, setFile] = useState<File | null>(null);
@@ -45,13 +47,14 @@ export function IngredientAttachments({ ingredientId, canWrite }: { ingredientId
         <Loading label="Loading attachments…" />
       ) : attachments.isError ? (
         <QueryError error={attachments.error} onRetry={() => void attachments.refetch()} retrying={attachments.isFetching} />
-      ) : attachments.data.length === 0 ? (
+      ) : attachments.data.total === 0 ? (
         <EmptyState title="No safety data sheet attached">
           {canWrite ? 'Upload the supplier’s current safety data sheet (PDF).' : 'A chemist can attach the supplier’s safety data sheet.'}
         </EmptyState>
       ) : (
+        <>
         <ul className="divide-y divide-ink-100">
-          {attachments.data.map((a) => (
+          {attachments.data.items.map((a) => (
             <li key={a.id} className="flex flex-wrap items-center justify-between gap-2 py-2 text-small">
               <div className="min-w-0">
                 <p className="truncate font-semibold text-ink-900">{a.filename}</p>
@@ -69,6 +72,8 @@ export function IngredientAttachments({ ingredientId, canWrite }: { ingredientId
             </li>
           ))}
         </ul>
+        <Pager noun="attachment" label="Pages of the attachments" page={paging.page} pageSize={paging.pageSize} total={attachments.data.total} onPageChange={paging.setPage} />
+        </>
       )}
 
       {canWrite && (

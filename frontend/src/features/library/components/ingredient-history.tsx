@@ -1,3 +1,4 @@
+import { Pager, usePageState } from '@/components/ui/pager';
 import { EmptyState } from '@/components/ui/empty-state';
 import { QueryError } from '@/components/ui/query-error';
 import { Loading } from '@/components/ui/spinner';
@@ -28,13 +29,15 @@ function versionOf(snapshot: unknown): number | null {
 }
 
 export function IngredientHistory({ ingredientId }: { ingredientId: number }) {
-  const history = useIngredientHistory(ingredientId);
+  const paging = usePageState(20);
+  const history = useIngredientHistory(ingredientId, { page: paging.page, pageSize: paging.pageSize });
   if (history.isPending) return <Loading label="Loading the history…" />;
   if (history.isError) return <QueryError error={history.error} onRetry={() => void history.refetch()} retrying={history.isFetching} />;
-  if (history.data.length === 0) return <EmptyState title="No recorded changes">Changes made in Packwright are listed here.</EmptyState>;
+  if (history.data.total === 0) return <EmptyState title="No recorded changes">Changes made in Packwright are listed here.</EmptyState>;
   return (
+    <div className="flex flex-col gap-3">
     <ol className="flex flex-col gap-3">
-      {history.data.map((event) => {
+      {history.data.items.map((event) => {
         const fields = changedFields(event.before, event.after);
         const version = versionOf(event.after);
         const via = typeof event.detail.via === 'string' ? event.detail.via : null;
@@ -56,5 +59,7 @@ export function IngredientHistory({ ingredientId }: { ingredientId: number }) {
         );
       })}
     </ol>
+    <Pager noun="change" label="Pages of the history" page={paging.page} pageSize={paging.pageSize} total={history.data.total} onPageChange={paging.setPage} />
+    </div>
   );
 }

@@ -1,12 +1,11 @@
 import { useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router';
 import { INGREDIENT_ROLES, INGREDIENT_SORTS, ingredientRoleSchema, type IngredientRole } from '@shared/schemas/library';
-import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
+import { Pager } from '@/components/ui/pager';
 import { SelectField, TextField } from '@/components/ui/field';
 import { QueryError } from '@/components/ui/query-error';
 import { Loading } from '@/components/ui/spinner';
-import { formatCount } from '@/lib/format';
 import { useIngredients, type IngredientListParams } from '../api/get-ingredients';
 import { IngredientsTable, sortParamFromState, sortStateFromParam } from './ingredients-table';
 import { ROLE_NAMES } from './labels';
@@ -59,7 +58,6 @@ export function LibraryBrowser() {
 
   const total = ingredients.data?.total ?? 0;
   const pageSize = params.pageSize ?? 25;
-  const pages = Math.max(1, Math.ceil(total / pageSize));
   const page = params.page ?? 1;
 
   return (
@@ -92,7 +90,7 @@ export function LibraryBrowser() {
         <Loading label="Loading the ingredient library…" />
       ) : ingredients.isError ? (
         <QueryError error={ingredients.error} onRetry={() => void ingredients.refetch()} retrying={ingredients.isFetching} />
-      ) : ingredients.data.ingredients.length === 0 ? (
+      ) : ingredients.data.items.length === 0 ? (
         <EmptyState title={params.q || params.role ? 'No ingredient matches' : 'The library is empty'}>
           {params.q || params.role
             ? 'Try a shorter search or another role.'
@@ -101,37 +99,21 @@ export function LibraryBrowser() {
       ) : (
         <>
           <IngredientsTable
-            ingredients={ingredients.data.ingredients}
+            ingredients={ingredients.data.items}
             sorting={sortStateFromParam(params.sort)}
             onSortingChange={(sorting) => update({ sort: sortParamFromState(sorting), page: undefined })}
             stale={ingredients.isPlaceholderData}
           />
-          <nav aria-label="Pages of the library" className="flex flex-wrap items-center justify-between gap-3 text-small text-ink-600">
-            <p aria-live="polite">
-              {formatCount(total, 'ingredient')} · page {page} of {pages}
-            </p>
-            <div className="flex items-center gap-2">
-              <SelectField
-                label="Rows per page"
-                hideLabel
-                controlSize="sm"
-                value={String(pageSize)}
-                onChange={(event) => update({ pageSize: event.target.value, page: undefined })}
-              >
-                {PAGE_SIZES.map((size) => (
-                  <option key={size} value={size}>
-                    {size} per page
-                  </option>
-                ))}
-              </SelectField>
-              <Button size="sm" variant="secondary" disabled={page <= 1} onClick={() => update({ page: String(page - 1) })}>
-                Previous<span className="sr-only"> page</span>
-              </Button>
-              <Button size="sm" variant="secondary" disabled={page >= pages} onClick={() => update({ page: String(page + 1) })}>
-                Next<span className="sr-only"> page</span>
-              </Button>
-            </div>
-          </nav>
+          <Pager
+            noun="ingredient"
+            label="Pages of the library"
+            page={page}
+            pageSize={pageSize}
+            total={total}
+            onPageChange={(p) => update({ page: String(p) })}
+            pageSizes={PAGE_SIZES}
+            onPageSizeChange={(size) => update({ pageSize: String(size), page: undefined })}
+          />
         </>
       )}
     </div>

@@ -290,12 +290,12 @@ export function MixtureBenchScreen({
   ingredientsQuery,
 }: {
   libraryQuery: { isPending: boolean; isError: boolean; error: unknown; data?: ChemistryLibrary; refetch: () => unknown; isFetching: boolean };
-  ingredientsQuery: { isPending: boolean; isError: boolean; error: unknown; data?: { ingredients: Ingredient[] }; refetch: () => unknown; isFetching: boolean };
+  ingredientsQuery: { isPending: boolean; isError: boolean; error: unknown; data?: { items: Ingredient[] }; refetch: () => unknown; isFetching: boolean };
 }) {
   if (libraryQuery.isPending || ingredientsQuery.isPending) return <Loading label="Loading the chemistry data and the ingredient library…" />;
   if (libraryQuery.isError)
     return <QueryError title="The chemistry data could not be loaded" error={libraryQuery.error} onRetry={() => void libraryQuery.refetch()} retrying={libraryQuery.isFetching} />;
   if (ingredientsQuery.isError)
     return <QueryError title="The ingredient library could not be loaded" error={ingredientsQuery.error} onRetry={() => void ingredientsQuery.refetch()} retrying={ingredientsQuery.isFetching} />;
-  return <MixtureBench library={libraryQuery.data!} ingredients={ingredientsQuery.data?.ingredients ?? []} />;
+  return <MixtureBench library={libraryQuery.data!} ingredients={ingredientsQuery.data?.items ?? []} />;
 }

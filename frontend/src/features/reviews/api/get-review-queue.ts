@@ -1,15 +1,23 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { reviewQueueResponseSchema } from '@shared/schemas/reviews';
 import { api } from '@/lib/api-client';
 import { reviewsKeys } from './get-review-history';
 
-/** What waits for the signed-in role, and what is in or past review. */
-export async function getReviewQueue(signal?: AbortSignal) {
-  return api.get('/api/reviews', { schema: reviewQueueResponseSchema, signal });
+export interface ReviewQueueParams {
+  /** `waiting`: what waits for the signed-in role; `recent`: everything in or past review. */
+  queue: 'waiting' | 'recent';
+  page: number;
+  pageSize: number;
 }
 
-export const getReviewQueueQueryOptions = () => queryOptions({ queryKey: reviewsKeys.queue(), queryFn: ({ signal }) => getReviewQueue(signal) });
+/** One page of one review queue, most recently changed first. */
+export async function getReviewQueue(params: ReviewQueueParams, signal?: AbortSignal) {
+  return api.get('/api/reviews', { query: { ...params }, schema: reviewQueueResponseSchema, signal });
+}
 
-export function useReviewQueue() {
-  return useQuery(getReviewQueueQueryOptions());
+export const getReviewQueueQueryOptions = (params: ReviewQueueParams) =>
+  queryOptions({ queryKey: [...reviewsKeys.queue(), params] as const, queryFn: ({ signal }) => getReviewQueue(params, signal), placeholderData: keepPreviousData });
+
+export function useReviewQueue(params: ReviewQueueParams) {
+  return useQuery(getReviewQueueQueryOptions(params));
 }

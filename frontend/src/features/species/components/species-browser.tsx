@@ -1,14 +1,14 @@
+import { Pager } from '@/components/ui/pager';
 import { useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router';
 import { PHASES, phaseSchema, type Species } from '@shared/schemas/library';
 import { Badge } from '@/components/ui/badge';
-import { Button } from '@/components/ui/button';
 import { cn } from '@/components/ui/cn';
 import { EmptyState } from '@/components/ui/empty-state';
 import { SelectField, TextField } from '@/components/ui/field';
 import { QueryError } from '@/components/ui/query-error';
 import { Loading } from '@/components/ui/spinner';
-import { formatCount, formatNumber } from '@/lib/format';
+import { formatNumber } from '@/lib/format';
 import { useSpecies, type SpeciesListParams } from '../api/get-species';
 
 export const PHASE_NAMES: Record<(typeof PHASES)[number], string> = {
@@ -61,7 +61,6 @@ export function SpeciesBrowser() {
   }, [draft]);
 
   const total = species.data?.total ?? 0;
-  const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
   const page = params.page ?? 1;
 
   return (
@@ -94,24 +93,12 @@ export function SpeciesBrowser() {
         <Loading label="Loading species data…" />
       ) : species.isError ? (
         <QueryError error={species.error} onRetry={() => void species.refetch()} retrying={species.isFetching} />
-      ) : species.data.species.length === 0 ? (
+      ) : species.data.items.length === 0 ? (
         <EmptyState title="No species match">Try the formula without charges or phase, or another phase.</EmptyState>
       ) : (
         <>
-          <SpeciesTable species={species.data.species} stale={species.isPlaceholderData} />
-          <nav aria-label="Pages of species data" className="flex flex-wrap items-center justify-between gap-3 text-small text-ink-600">
-            <p aria-live="polite">
-              {formatCount(total, 'species', 'species')} · page {page} of {pages}
-            </p>
-            <div className="flex gap-2">
-              <Button size="sm" variant="secondary" disabled={page <= 1} onClick={() => update({ page: String(page - 1) })}>
-                Previous<span className="sr-only"> page</span>
-              </Button>
-              <Button size="sm" variant="secondary" disabled={page >= pages} onClick={() => update({ page: String(page + 1) })}>
-                Next<span className="sr-only"> page</span>
-              </Button>
-            </div>
-          </nav>
+          <SpeciesTable species={species.data.items} stale={species.isPlaceholderData} />
+          <Pager noun="species" plural="species" label="Pages of species data" page={page} pageSize={PAGE_SIZE} total={total} onPageChange={(p) => update({ page: String(p) })} />
         </>
       )}
     </div>

@@ -1,24 +1,28 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { userListResponseSchema, type User } from '@shared/schemas/users';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { z } from 'zod';
+import { userListResponseSchema, type userListQuerySchema } from '@shared/schemas/users';
 import { api } from '@/lib/api-client';
+
+export type UserListParams = Partial<z.output<typeof userListQuerySchema>>;
+export const USERS_FIRST_PAGE: UserListParams = { page: 1, pageSize: 25 };
 
 export const usersKeys = {
   all: ['users'] as const,
-  list: () => [...usersKeys.all, 'list'] as const,
+  list: (params: UserListParams) => [...usersKeys.all, 'list', params] as const,
 };
 
-/** Every member of the admin's workspace. */
-export async function getUsers(signal?: AbortSignal): Promise<User[]> {
-  const { users } = await api.get('/api/users', { schema: userListResponseSchema, signal });
-  return users;
+/** One page of the members of the admin's workspace, by name. */
+export async function getUsers(params: UserListParams, signal?: AbortSignal) {
+  return api.get('/api/users', { query: params, schema: userListResponseSchema, signal });
 }
 
-export const getUsersQueryOptions = () =>
+export const getUsersQueryOptions = (params: UserListParams = USERS_FIRST_PAGE) =>
   queryOptions({
-    queryKey: usersKeys.list(),
-    queryFn: ({ signal }) => getUsers(signal),
+    queryKey: usersKeys.list(params),
+    queryFn: ({ signal }) => getUsers(params, signal),
+    placeholderData: keepPreviousData,
   });
 
-export function useUsers() {
-  return useQuery(getUsersQueryOptions());
+export function useUsers(params: UserListParams = USERS_FIRST_PAGE) {
+  return useQuery(getUsersQueryOptions(params));
 }

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
+import type { Paged } from '@shared/schemas';
 import { userSchema, type UpdateUserRequest, type User } from '@shared/schemas/users';
 import { api } from '@/lib/api-client';
 import { usersKeys } from './get-users';
@@ -17,8 +18,9 @@ export function useUpdateUser() {
   return useMutation({
     mutationFn: updateUser,
     onSuccess: (updated) => {
-      queryClient.setQueryData<User[]>(usersKeys.list(), (users) =>
-        users?.map((user) => (user.id === updated.id ? updated : user)),
+      // Every cached page of members shows the change at once.
+      queryClient.setQueriesData<Paged<User>>({ queryKey: [...usersKeys.all, 'list'] }, (users) =>
+        users ? { ...users, items: users.items.map((user) => (user.id === updated.id ? updated : user)) } : users,
       );
     },
   });

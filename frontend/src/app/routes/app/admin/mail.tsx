@@ -5,6 +5,7 @@ import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { QueryError } from '@/components/ui/query-error';
+import { Pager, usePageState } from '@/components/ui/pager';
 import { Loading } from '@/components/ui/spinner';
 import { getMailMessagesQueryOptions, useMailMessages } from '@/features/mail/api/get-mail-messages';
 import { MailInbox } from '@/features/mail/components/mail-inbox';
@@ -19,7 +20,8 @@ export const clientLoader =
   };
 
 export default function AdminMailRoute() {
-  const mail = useMailMessages();
+  const paging = usePageState(25);
+  const mail = useMailMessages({ page: paging.page, pageSize: paging.pageSize });
   const [checking, setChecking] = useState(false);
   const checkNow = () => {
     setChecking(true);
@@ -47,7 +49,10 @@ export default function AdminMailRoute() {
           Packwright is sending mail through a real mail server, so messages are not kept here.
         </Alert>
       ) : (
-        <MailInbox messages={mail.data.messages} />
+        <div className="flex flex-col gap-3">
+          <MailInbox messages={mail.data.items} />
+          <Pager noun="message" label="Pages of the mail" page={paging.page} pageSize={paging.pageSize} total={mail.data.total} onPageChange={paging.setPage} pageSizes={[25, 50, 100]} onPageSizeChange={paging.setPageSize} />
+        </div>
       )}
     </>
   );

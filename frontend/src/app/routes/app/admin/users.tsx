@@ -6,6 +6,7 @@ import { QueryError } from '@/components/ui/query-error';
 import { Loading } from '@/components/ui/spinner';
 import { getInvitationsQueryOptions, useInvitations } from '@/features/users/api/get-invitations';
 import { getUsersQueryOptions, useUsers } from '@/features/users/api/get-users';
+import { Pager, usePageState } from '@/components/ui/pager';
 import { InvitationsList } from '@/features/users/components/invitations-list';
 import { InviteForm } from '@/features/users/components/invite-form';
 import { UsersTable } from '@/features/users/components/users-table';
@@ -18,15 +19,18 @@ export const clientLoader =
   async ({ request }: LoaderFunctionArgs) => {
     await requireRole(queryClient, request, ['admin']);
     void queryClient.prefetchQuery(getUsersQueryOptions());
-    void queryClient.prefetchQuery(getInvitationsQueryOptions());
+    void queryClient.prefetchQuery(getInvitationsQueryOptions({ page: 1, pageSize: 10, status: 'pending' }));
     return null;
   };
 
 export default function AdminUsersRoute() {
   const me = useSessionUser();
-  const users = useUsers();
-  const invitations = useInvitations();
-  const pendingCount = invitations.data?.filter((invitation) => invitation.status === 'pending').length;
+  const userPaging = usePageState(25);
+  const invitationPaging = usePageState(10);
+  const users = useUsers({ page: userPaging.page, pageSize: userPaging.pageSize });
+  // Only pending invitations are listed; the server filters and counts them.
+  const invitations = useInvitations({ page: invitationPaging.page, pageSize: invitationPaging.pageSize, status: 'pending' });
+  const pendingCount = invitations.data?.total;
 
   return (
     <>
@@ -40,7 +44,7 @@ export default function AdminUsersRoute() {
         <Card>
           <CardHeader
             title="Members"
-            description={users.data ? formatCount(users.data.length, 'member') : undefined}
+            description={users.data ? formatCount(users.data.total, 'member') : undefined}
           />
           <CardBody>
             {users.isPending ? (
@@ -48,7 +52,10 @@ export default function AdminUsersRoute() {
             ) : users.isError ? (
               <QueryError error={users.error} onRetry={() => void users.refetch()} retrying={users.isFetching} />
             ) : (
-              <UsersTable users={users.data} currentUserId={me.id} />
+              <div className="flex flex-col gap-3">
+                <UsersTable users={users.data.items} currentUserId={me.id} />
+                <Pager noun="member" label="Pages of the members" page={userPaging.page} pageSize={userPaging.pageSize} total={users.data.total} onPageChange={userPaging.setPage} pageSizes={[25, 50, 100]} onPageSizeChange={userPaging.setPageSize} />
+              </div>
             )}
           </CardBody>
         </Card>
@@ -72,7 +79,10 @@ export default function AdminUsersRoute() {
               ) : invitations.isError ? (
                 <QueryError error={invitations.error} onRetry={() => void invitations.refetch()} retrying={invitations.isFetching} />
               ) : (
-                <InvitationsList invitations={invitations.data} />
+                <div className="flex flex-col gap-3">
+                  <InvitationsList invitations={invitations.data.items} />
+                  <Pager noun="invitation" label="Pages of the pending invitations" page={invitationPaging.page} pageSize={invitationPaging.pageSize} total={invitations.data.total} onPageChange={invitationPaging.setPage} />
+                </div>
               )}
             </CardBody>
           </Card>
