@@ -8,6 +8,7 @@ import { AppError } from '../http/errors';
 import { validate, validated } from '../http/validate';
 import { decideReview, reviewHistory, reviewQueue, reviseCandidate, submitCandidate } from './reviews.service';
 import { buildDossier, candidateHazardsView } from './dossier.service';
+import { candidateConfidence } from '../lab-logs/lab-logs.service';
 import { renderDossierPdf } from './dossier-pdf';
 import './reviews.openapi';
 
@@ -63,7 +64,9 @@ candidateReviewsRouter.get('/:id/dossier', validate({ params: idParamsSchema }),
 candidateReviewsRouter.get('/:id/dossier.pdf', validate({ params: z.object({ id: z.coerce.number().int().positive() }), query: paperQuerySchema }), async (req, res) => {
   const { params, query } = validated(res, { params: z.object({ id: z.coerce.number().int().positive() }), query: paperQuerySchema });
   const dossier = await buildDossier(req.user!.workspaceId, params.id);
-  const pdf = await renderDossierPdf(dossier, query.paper);
+  // The uncertainty band as the dossier page shows it; the PDF prints without it if it cannot be computed.
+  const confidence = await candidateConfidence(req.user!.workspaceId, params.id).catch(() => null);
+  const pdf = await renderDossierPdf(dossier, query.paper, confidence);
   res.set({ 'Content-Type': 'application/pdf', 'Cache-Control': 'private, no-store', 'Content-Disposition': `attachment; filename="dossier-candidate-${params.id}-rev${dossier.status.revision}-${query.paper}.pdf"` });
   res.send(pdf);
 });

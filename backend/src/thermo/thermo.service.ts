@@ -52,7 +52,16 @@ export async function reactionThermo(workspaceId: number, input: ReactionRequest
       crossoverKirchhoffC: r.crossoverKirchhoffC,
       tempC: r.tempC,
       warnings: r.warnings,
-      terms: r.terms.map((t) => ({ key: t.species.key, name: t.species.name, nu: t.nu, source: t.species.source })),
+      terms: r.terms.map((t) => ({
+        key: t.species.key,
+        name: t.species.name,
+        formula: t.species.formula,
+        phase: t.species.phase,
+        nu: t.nu,
+        molarMass_g_per_mol: t.species.molarMass_g_per_mol,
+        Cp_J_per_mol_K: t.species.Cp_J_per_mol_K,
+        source: t.species.source,
+      })),
     };
   } catch (error) {
     if (error instanceof ReactionBalanceError) {

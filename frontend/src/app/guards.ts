@@ -4,6 +4,7 @@ import type { SessionUser } from '@shared/schemas/auth';
 import type { Role } from '@shared/schemas/common';
 import { getMeQueryOptions } from '@/features/auth/api/get-me';
 import { safeNextPath, signInHref } from '@/lib/api-client';
+import { mayHaveSession } from '@/lib/session';
 
 /** Loader guard: the signed-in member, or a redirect to /sign-in?next=<here>. */
 export async function requireUser(queryClient: QueryClient, request: Request): Promise<SessionUser> {
@@ -28,6 +29,8 @@ export async function requireRole(queryClient: QueryClient, request: Request, ro
 
 /** For the sign-in pages: a member who is already signed in goes where they were heading. */
 export async function redirectIfSignedIn(queryClient: QueryClient, request: Request): Promise<null> {
+  // Not signed in is the normal state here: without a session hint the server is not asked.
+  if (!mayHaveSession() && queryClient.getQueryData(getMeQueryOptions().queryKey) === undefined) return null;
   const user = await queryClient.ensureQueryData(getMeQueryOptions()).catch(() => null);
   if (user) {
     const next = new URL(request.url).searchParams.get('next');

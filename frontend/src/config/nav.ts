@@ -67,7 +67,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   {
     to: '/reactions',
     label: 'Reactions',
-    description: 'ΔH, ΔS and ΔG of a reaction, and where it turns favourable.',
+    description: 'Heat per gram, how hot the pack gets, the gas it makes, and whether it starts by itself.',
     roles: EVERYONE,
     quickLink: true,
   },

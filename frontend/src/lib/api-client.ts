@@ -1,5 +1,6 @@
 import type { z } from 'zod';
 import { apiErrorSchema, type FieldError } from '@shared/schemas/common';
+import { rememberSession } from './session';
 
 /**
  * The one API client. Every call goes through `api.*`: same-origin JSON with the session cookie,
@@ -160,11 +161,14 @@ async function request<S extends z.ZodType | undefined>(
       fields: parsed.success ? parsed.data.error.fields : undefined,
       retryAfterSeconds: retryAfterSeconds(response, parsed.success ? parsed.data.error.retryAfterSeconds : undefined),
     });
+    if (response.status === 401) rememberSession(false);
     if (response.status === 401 && !PATHS_THAT_HANDLE_401.includes(path)) {
       onUnauthorized(currentPath());
     }
     throw error;
   }
+  if (path === '/api/auth/login' || path === '/api/auth/me') rememberSession(true);
+  if (path === '/api/auth/logout') rememberSession(false);
 
   if (!options.schema) return undefined as Result<S>;
   const parsed = options.schema.safeParse(payload);

@@ -78,9 +78,22 @@ function addInto(target: Record<string, number>, source: Record<string, number>,
 }
 
 /**
+ * Whether the digits before a trailing sign (no `^`) are the charge rather than a count.
+ * A monatomic ion takes them as the charge (`Ca2+` is Ca²⁺, `Fe3+` Fe³⁺, `O2-` oxide); a
+ * polyatomic one takes one digit as a count (`NH4+`, `NO3-`, `HCO3-`) and, with two or more
+ * digits, the last as the charge (`SO42-` is SO₄²⁻, `PO43-` PO₄³⁻, `Cr2O72-`). A single-digit
+ * charge is the usual case for ions in aqueous chemistry (common practice, no source).
+ */
+function isChargeDigits(before: string, digits: string): boolean {
+  if (digits.length > 1) return true;
+  if (digits === '0') return false;
+  return /^[A-Z][a-z]?$/.test(before);
+}
+
+/**
  * Split off a trailing phase tag and a trailing charge. Returns the core formula, the charge
- * and the phase. Charge forms: `NH4+`, `Fe++`, `SO4^2-`, `Ca^2+`, `SO4^-2`, `SO4-2`, `Fe+3`,
- * `SO4²⁻`. A bare number before a sign without `^` is a count, not a charge: `NH4+` is +1.
+ * and the phase. Charge forms: `NH4+`, `Fe++`, `SO4^2-`, `Ca^2+`, `Ca2+`, `Ca+2`, `SO4^-2`, `SO4-2`,
+ * `SO42-`, `Fe+3`, `SO4²⁻`. Digits before a sign without `^` follow isChargeDigits: `NH4+` is +1, `Ca2+` is +2.
  */
 function splitSuffixes(input: string): { core: string; charge: number; phase: Phase | null } {
   let s = input.trim().replace(/−/g, '-');
@@ -114,6 +127,12 @@ function splitSuffixes(input: string): { core: string; charge: number; phase: Ph
   } else if ((m = /\^([+-])(\d+)$/.exec(s))) {
     charge = (m[1] === '+' ? 1 : -1) * Number(m[2]);
     s = s.slice(0, m.index);
+  } else if ((m = /(\d+)([+-])$/.exec(s)) && isChargeDigits(s.slice(0, m.index), m[1] as string)) {
+    // `Ca2+`, `Fe3+`, `SO42-`: the charge written before its sign, as in print (see isChargeDigits).
+    const digits = m[1] as string;
+    const count = digits.length > 1 ? digits.slice(0, -1) : '';
+    charge = (m[2] === '+' ? 1 : -1) * Number(digits.slice(-1));
+    s = s.slice(0, m.index) + count;
   } else if ((m = /\^?([+-]+)$/.exec(s))) {
     const signs = m[1] as string;
     if (/^\++$|^-+$/.test(signs)) charge = (signs[0] === '+' ? 1 : -1) * signs.length;

@@ -44,3 +44,14 @@ export type { FreezingPointResult, InfiniteDilutionResult, IntegralEnthalpyResul
 export { solutionHeatCapacity, soluteApparentHeatCapacity_J_per_gK, waterHeatCapacity_J_per_gK } from './solution-heat-capacity';
 export type { SoluteFraction, SolutionHeatCapacityResult } from './solution-heat-capacity';
 export { linear, pchip } from './interpolate';
+export {
+  ATM_PA,
+  GAS_CONSTANT_J_PER_MOL_K,
+  WATER_VAP_J_PER_G,
+  adiabaticDeltaT_K,
+  idealGasVolumeL,
+  packCharge,
+  runsUntriggered,
+  stoichiometricCharge,
+} from './pack-reaction';
+export type { PackChargeInput, PackChargeResult, PackTerm } from './pack-reaction';

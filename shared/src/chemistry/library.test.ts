@@ -114,3 +114,13 @@ describe('createChemistryLibrary', () => {
     }
   });
 });
+
+describe('ions written as in print', () => {
+  it('Ca2+, Ca+2 and Ca^2+ find the same aqueous ion', async () => {
+    const { defaultChemistryLibrary, findSpecies } = await import('./library');
+    const lib = defaultChemistryLibrary();
+    const keys = ['Ca2+', 'Ca+2', 'Ca^2+'].map((f) => findSpecies(lib, f).key);
+    expect(new Set(keys).size).toBe(1);
+    expect(keys[0]).toMatch(/^Ca\^2\+\(a[iq]\)$/);
+  });
+});

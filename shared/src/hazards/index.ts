@@ -1,5 +1,6 @@
 /** Public API of the hazards module: H/P statements, demo hazard data, mixture classification, hazard notes. */
 export * from './h-statements';
+export * from './hazard-class-names';
 export * from './demo-hazard-data';
 export * from './mixture-classification';
 export * from './hazard-notes';

@@ -1,4 +1,5 @@
 import type { GhsClassification, HazardNote, IngredientHazardData, LabelElements } from '../schemas/hazards';
+import { hazardClassLabel } from './hazard-class-names';
 import { orderStatementCodes, pStatementsFor, P_KEEP_OUT_OF_REACH_OF_CHILDREN } from './h-statements';
 
 /**
@@ -328,7 +329,7 @@ export function classifyMixture(components: readonly MixtureComponent[], options
     const total = hit.reduce((a, x) => a + x.pct, 0);
     if (hit.length && total >= g.cutoffPct && !out.some((c) => c.hazardClass === g.hazardClass)) {
       const hs = [...new Set(hit.flatMap((x) => has(x.data, g.hazardClass, g.ingredientCategories)!.hStatements))];
-      out.push({ hazardClass: g.hazardClass, category: g.mixtureCategory, hStatements: hs, rule: `Σ ${g.hazardClass} ${g.ingredientCategories.join('/')} = ${fmt(total)} ≥ ${g.cutoffPct} % → ${g.hazardClass} ${g.mixtureCategory} (${g.source})` });
+      out.push({ hazardClass: g.hazardClass, category: g.mixtureCategory, hStatements: hs, rule: `Σ ${hazardClassLabel(g.hazardClass, g.ingredientCategories.join('/'))} = ${fmt(total)} ≥ ${g.cutoffPct} % → ${hazardClassLabel(g.hazardClass, g.mixtureCategory)} (${g.source})` });
     }
   }
 
@@ -346,7 +347,7 @@ export function classifyMixture(components: readonly MixtureComponent[], options
         hazardClass: c.hazardClass,
         category: c.category,
         hStatements: [...c.hStatements],
-        rule: `carried over from ${x.name} (${fmt(x.pct)} ≥ 1 %): ${c.hazardClass} is not classified by arithmetic in a mixture; the UN test on the mixture (GHS ch. 2) decides`,
+        rule: `carried over from ${x.name} (${fmt(x.pct)} ≥ 1 %): ${hazardClassLabel(c.hazardClass)} is not classified by arithmetic in a mixture; the UN test on the mixture (GHS ch. 2) decides`,
       });
       notes.push({
         severity: 'caution',

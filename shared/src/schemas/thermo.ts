@@ -39,7 +39,18 @@ export const reactionResponseSchema = z.object({
   tempC: z.number(),
   warnings: z.array(warningSchema),
   /** The species used, with signed stoichiometric numbers (products +) and their sources. */
-  terms: z.array(z.object({ key: z.string(), name: z.string(), nu: z.number(), source: z.string() })),
+  terms: z.array(
+    z.object({
+      key: z.string(),
+      name: z.string(),
+      formula: z.string(),
+      phase: phaseSchema,
+      nu: z.number(),
+      molarMass_g_per_mol: z.number(),
+      Cp_J_per_mol_K: z.number().nullable(),
+      source: z.string(),
+    }),
+  ),
 });
 export type ReactionResponse = z.infer<typeof reactionResponseSchema>;
 

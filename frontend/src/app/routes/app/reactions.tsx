@@ -14,10 +14,10 @@ export const clientLoader =
 export default function ReactionsRoute() {
   return (
     <>
-      <title>Reactions · Packwright</title>
+      <title>Reaction in a pack · Packwright</title>
       <PageHeader
-        title="Reactions"
-        description="ΔH, ΔS and ΔG of a balanced reaction from the species data, and the temperature where it turns favourable."
+        title="Reaction in a pack"
+        description="Write a reaction, give the reagents their grams and the water that takes up the heat: see the heat per gram, how hot or cold the pack gets, the gas it makes, and whether it starts by itself."
       />
       <ReactionCalculator />
     </>

@@ -1,40 +1,31 @@
 import { useEffect, useMemo, useState } from 'react';
-import { useFieldArray, useForm, useWatch, type Control, type UseFormRegister } from 'react-hook-form';
-import { reactionAtTemperature } from '@shared/chemistry';
+import { useFieldArray, useForm, useWatch, type Control, type UseFormRegister, type UseFormSetValue } from 'react-hook-form';
 import { PHASES } from '@shared/schemas/library';
+import { stoichiometricCharge } from '@shared/chemistry/pack-reaction';
 import { reactionRequestSchema, type ReactionRequest, type ReactionResponse } from '@shared/schemas/thermo';
-import { LineChart, type ChartRule, type ChartSeries } from '@/components/charts/line-chart';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { Card, CardBody, CardHeader } from '@/components/ui/card';
 import { cn } from '@/components/ui/cn';
 import { EmptyState } from '@/components/ui/empty-state';
 import { SelectField, TextField } from '@/components/ui/field';
+import { phaseInWords } from '@/components/ui/formula';
 import { Spinner } from '@/components/ui/spinner';
 import { errorMessage, isApiError } from '@/lib/api-client';
-import { formatNumber, formatQuantity } from '@/lib/format';
 import { useReactionThermo } from '../api/get-reaction-thermo';
+import { PackAnswers } from './pack-answers';
+import { num, packTerms, reagentRows, type ReactionValues, type Term } from './pack-terms';
 
-type Term = { formula: string; phase: string; coef: string };
-type ReactionValues = { reactants: Term[]; products: Term[]; tempC: string };
 
+/** A quicklime heater: 40 g CaO with its water of reaction and five times the reagents' mass in water as heat sink. */
 const DEFAULTS: ReactionValues = {
   reactants: [
-    { formula: 'CaO', phase: 'cr', coef: '1' },
-    { formula: 'H2O', phase: 'l', coef: '1' },
+    { formula: 'CaO', phase: 'cr', coef: '1', massG: '40' },
+    { formula: 'H2O', phase: 'l', coef: '1', massG: '13' },
   ],
-  products: [{ formula: 'Ca(OH)2', phase: 'cr', coef: '1' }],
-  tempC: '25',
+  products: [{ formula: 'Ca(OH)2', phase: 'cr', coef: '1', massG: '' }],
+  tempC: '20',
+  waterRatio: '5',
 };
-
-const PHASE_LABELS: Record<string, string> = { cr: 'cr (solid)', l: 'l (liquid)', g: 'g (gas)', aq: 'aq', ai: 'ai (ions)', ao: 'ao' };
-
-function num(text: string): number | undefined {
-  const t = text.trim().replace(',', '.').replace('−', '-');
-  if (t === '') return undefined;
-  const n = Number(t);
-  return Number.isFinite(n) ? n : Number.NaN;
-}
 
 /** Builds the request from the fields and checks it with the schema the server validates with. */
 function reactionRequest(values: ReactionValues): { request: ReactionRequest | null; errors: Record<string, string> } {
@@ -55,6 +46,19 @@ function reactionRequest(values: ReactionValues): { request: ReactionRequest | n
   return { request: parsed.data, errors };
 }
 
+/** The grams and the water ratio, checked here (the server does not need them). */
+export function chargeErrors(values: ReactionValues): Record<string, string> {
+  const errors: Record<string, string> = {};
+  values.reactants.forEach((t, k) => {
+    const g = num(t.massG);
+    if (g !== undefined && !(g >= 0)) errors[`reactants.${k}.massG`] = 'must be a number of grams, 0 or more';
+    else if (g !== undefined && g > 100_000) errors[`reactants.${k}.massG`] = 'must be at most 100 000 g';
+  });
+  const w = num(values.waterRatio);
+  if (w !== undefined && !(w >= 0 && w <= 1000)) errors.waterRatio = 'must be a number from 0 to 1000';
+  return errors;
+}
+
 /** Debounces a value: the last one, `delayMs` after it stopped changing. */
 function useDebounced<T>(value: T, key: string, delayMs: number): T {
   const [debounced, setDebounced] = useState(value);
@@ -72,52 +76,112 @@ export function ReactionCalculator() {
   const key = JSON.stringify(values);
   // eslint-disable-next-line react-hooks/exhaustive-deps
   const local = useMemo(() => reactionRequest(values), [key]);
+  // eslint-disable-next-line react-hooks/exhaustive-deps
+  const charge = useMemo(() => chargeErrors(values), [key]);
   const request = useDebounced(local.request, JSON.stringify(local.request), 300);
   const thermo = useReactionThermo(request);
 
   // The server names the field an error belongs to (unknown species at reactants.1.formula, imbalance at products).
   const serverErrors: Record<string, string> = {};
   if (thermo.isError && isApiError(thermo.error)) for (const f of thermo.error.fields) serverErrors[f.field] = f.message;
-  const errorOf = (field: string) => local.errors[field] ?? serverErrors[field];
+  const errorOf = (field: string) => local.errors[field] ?? charge[field] ?? serverErrors[field];
   const sideError = (side: 'reactants' | 'products') => local.errors[side] ?? serverErrors[side];
   const unplaced = thermo.isError && (!isApiError(thermo.error) || thermo.error.fields.length === 0) ? errorMessage(thermo.error) : null;
-  const tempError = local.errors.tempC ?? serverErrors.tempC;
 
   return (
-    <div className="grid grid-cols-1 items-start gap-gutter lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
-      <Card>
-        <CardHeader title="Reaction" description="Formula, phase and coefficient of each species; the reaction must balance." />
-        <CardBody>
-          <form noValidate onSubmit={(e) => e.preventDefault()} className="flex flex-col gap-5">
-            <TermList side="reactants" title="Reactants" control={form.control} register={form.register} errorOf={errorOf} sideError={sideError('reactants')} />
-            <TermList side="products" title="Products" control={form.control} register={form.register} errorOf={errorOf} sideError={sideError('products')} />
-            <TextField label="Temperature (°C)" inputMode="decimal" error={tempError} containerClassName="max-w-48" {...form.register('tempC')} />
-          </form>
-        </CardBody>
-      </Card>
+    <div className="grid grid-cols-1 items-start gap-gutter xl:grid-cols-[minmax(0,6fr)_minmax(0,5fr)]">
+      <section aria-labelledby="pack-answers-title" className="order-1 flex min-w-0 flex-col gap-4 xl:order-2">
+        <div className="flex flex-wrap items-baseline justify-between gap-2">
+          <h2 id="pack-answers-title" className="text-lead font-bold text-ink-900">
+            What this charge does in a pack
+          </h2>
+          {thermo.isFetching && (
+            <span role="status" className="flex items-center gap-2 text-caption text-ink-500">
+              <Spinner size="sm" /> Updating…
+            </span>
+          )}
+        </div>
+        <div aria-live="polite" className="flex flex-col gap-4">
+          {unplaced && <Alert tone="danger" title="This reaction could not be evaluated">{unplaced}</Alert>}
+          {thermo.isError && !unplaced && <Alert tone="danger" title="Fix the reaction">{errorMessage(thermo.error)}</Alert>}
+          {!request && !thermo.data ? (
+            <EmptyState title="Write a balanced reaction">At least one reagent and one product, each with a number of moles.</EmptyState>
+          ) : thermo.isPending ? (
+            <p role="status" className="flex items-center gap-2 text-ink-500">
+              <Spinner /> Working it out…
+            </p>
+          ) : thermo.data ? (
+            <PackAnswers
+              result={thermo.data}
+              values={values}
+              chargeValid={Object.keys(charge).length === 0}
+              stale={thermo.isError || thermo.isPlaceholderData || !local.request}
+            />
+          ) : null}
+        </div>
+      </section>
 
-      <Card>
-        <CardHeader
-          title="Thermodynamics"
-          description="Standard-state values from the species data, Kirchhoff-corrected to the temperature."
-          action={thermo.isFetching ? <span role="status" className="flex items-center gap-2 text-caption text-ink-500"><Spinner size="sm" /> Updating…</span> : undefined}
-        />
-        <CardBody>
-          <div aria-live="polite" className="flex flex-col gap-4">
-            {unplaced && <Alert tone="danger" title="This reaction could not be evaluated">{unplaced}</Alert>}
-            {thermo.isError && !unplaced && (
-              <Alert tone="danger" title="Fix the reaction">{errorMessage(thermo.error)}</Alert>
-            )}
-            {!request && !thermo.data ? (
-              <EmptyState title="Enter a balanced reaction">At least one reactant and one product, each with a coefficient.</EmptyState>
-            ) : thermo.isPending ? (
-              <p role="status" className="flex items-center gap-2 text-ink-500"><Spinner /> Evaluating…</p>
-            ) : thermo.data ? (
-              <ReactionResult result={thermo.data} stale={thermo.isError || thermo.isPlaceholderData || !local.request} />
-            ) : null}
+      <section aria-labelledby="charge-title" className="order-2 min-w-0 rounded-card border border-ink-100 bg-surface shadow-card xl:order-1">
+        <header className="border-b border-ink-100 px-5 py-4">
+          <h2 id="charge-title" className="text-lead font-bold text-ink-900">
+            The charge
+          </h2>
+          <p className="mt-0.5 text-small text-ink-500">
+            The reaction as it runs in the pack, and how many grams of each reagent go in. A reagent left without grams counts as in excess.
+          </p>
+        </header>
+        <form noValidate onSubmit={(e) => e.preventDefault()} className="flex flex-col gap-5 px-5 py-4">
+          <TermList side="reactants" title="Reagents" control={form.control} register={form.register} errorOf={errorOf} sideError={sideError('reactants')} />
+          <StoichiometricFill values={values} result={thermo.data} setValue={form.setValue} />
+          <TermList side="products" title="Products" control={form.control} register={form.register} errorOf={errorOf} sideError={sideError('products')} />
+          <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
+            <TextField
+              label="Water as heat sink (g per g of reagents)"
+              hint="Free water beyond what the reaction uses; it takes up heat."
+              inputMode="decimal"
+              error={errorOf('waterRatio')}
+              {...form.register('waterRatio')}
+            />
+            <TextField
+              label="Room temperature (°C)"
+              hint="Where the pack starts and is stored."
+              inputMode="decimal"
+              error={local.errors.tempC ?? serverErrors.tempC}
+              {...form.register('tempC')}
+            />
           </div>
-        </CardBody>
-      </Card>
+        </form>
+      </section>
+    </div>
+  );
+}
+
+/** Sets the other reagents' grams to match the first one's, in the proportions of the reaction (shared stoichiometricCharge). */
+function StoichiometricFill({ values, result, setValue }: { values: ReactionValues; result: ReactionResponse | undefined; setValue: UseFormSetValue<ReactionValues> }) {
+  const first = num(values.reactants[0]?.massG);
+  const rows = reagentRows(values);
+  const terms = result ? packTerms(result) : null;
+  const reagentTerms = terms?.filter((t) => t.nu < 0) ?? [];
+  const usable = terms !== null && rows.length > 1 && rows[0] === 0 && reagentTerms.length === rows.length && first !== undefined && first > 0;
+  return (
+    <div className="-mt-2 flex flex-wrap items-center gap-x-2 text-caption text-ink-500">
+      <Button
+        variant="ghost"
+        size="sm"
+        disabled={!usable}
+        aria-describedby="stoich-why"
+        onClick={() => {
+          if (!usable) return;
+          const grams = stoichiometricCharge(terms, first);
+          rows.forEach((row, k) => {
+            const g = grams[reagentTerms[k]!.key];
+            if (k > 0 && g !== undefined) setValue(`reactants.${row}.massG`, String(Math.round(g * 100) / 100), { shouldDirty: true });
+          });
+        }}
+      >
+        Match the other reagents to the first
+      </Button>
+      <span id="stoich-why">{usable ? 'in the proportions of the reaction, nothing left over.' : 'Needs two or more reagents, grams for the first, and a reaction that balances.'}</span>
     </div>
   );
 }
@@ -138,35 +202,42 @@ function TermList({
   sideError?: string;
 }) {
   const terms = useFieldArray({ control, name: side });
-  const singular = side === 'reactants' ? 'Reactant' : 'Product';
+  const singular = side === 'reactants' ? 'Reagent' : 'Product';
+  const withMass = side === 'reactants';
+  const columns = withMass ? 'sm:grid-cols-[4.5rem_minmax(0,1fr)_9rem_5.5rem_auto]' : 'sm:grid-cols-[4.5rem_minmax(0,1fr)_9rem_auto]';
   return (
-    <fieldset className={cn('flex flex-col gap-2 rounded-control', sideError && 'border-l-4 border-rust-500 pl-3')} aria-describedby={sideError ? `${side}-error` : undefined}>
+    <fieldset className={cn('flex min-w-0 flex-col gap-2 rounded-control', sideError && 'border-l-4 border-rust-500 pl-3')} aria-describedby={sideError ? `${side}-error` : undefined}>
       <legend className="mb-1 text-small font-bold text-ink-900">{title}</legend>
-      <div aria-hidden="true" className="grid grid-cols-[5rem_minmax(0,1fr)_8.5rem_4.5rem] gap-2 text-caption font-semibold text-ink-600">
-        <span>Coefficient (mol)</span>
+      <div aria-hidden="true" className={cn('hidden gap-2 text-caption font-semibold text-ink-600 sm:grid', columns)}>
+        <span>Moles</span>
         <span>Formula</span>
-        <span>Phase</span>
+        <span>State</span>
+        {withMass && <span>Grams</span>}
       </div>
       {terms.fields.map((field, k) => (
-        <div key={field.id} className="grid grid-cols-[5rem_minmax(0,1fr)_8.5rem_4.5rem] items-start gap-2">
-          <TextField label={`${singular} ${k + 1}: coefficient (mol)`} hideLabel inputMode="decimal" error={errorOf(`${side}.${k}.coef`)} {...register(`${side}.${k}.coef`)} />
+        <div key={field.id} className={cn('grid grid-cols-[4.5rem_minmax(0,1fr)] items-start gap-2 border-b border-ink-100 pb-2 sm:border-0 sm:pb-0', columns)}>
+          <TextField label={`${singular} ${k + 1}: moles in the reaction`} hideLabel inputMode="decimal" error={errorOf(`${side}.${k}.coef`)} {...register(`${side}.${k}.coef`)} />
           <TextField
             label={`${singular} ${k + 1}: formula`}
             hideLabel
             autoComplete="off"
             spellCheck={false}
+            placeholder="e.g. CaO, Ca2+"
             error={errorOf(`${side}.${k}.formula`)}
             {...register(`${side}.${k}.formula`)}
           />
-          <SelectField label={`${singular} ${k + 1}: phase`} hideLabel error={errorOf(`${side}.${k}.phase`)} {...register(`${side}.${k}.phase`)}>
-            <option value="">from formula</option>
+          <SelectField label={`${singular} ${k + 1}: state`} hideLabel error={errorOf(`${side}.${k}.phase`)} {...register(`${side}.${k}.phase`)}>
+            <option value="">as written</option>
             {PHASES.map((p) => (
               <option key={p} value={p}>
-                {PHASE_LABELS[p] ?? p}
+                {phaseInWords(p)}
               </option>
             ))}
           </SelectField>
-          <Button variant="ghost" size="sm" className="mt-1" disabled={terms.fields.length <= 1} onClick={() => terms.remove(k)}>
+          {withMass ? (
+            <TextField label={`${singular} ${k + 1}: grams in the pack`} hideLabel inputMode="decimal" placeholder="g" error={errorOf(`${side}.${k}.massG`)} {...register(`${side}.${k}.massG`)} />
+          ) : null}
+          <Button variant="ghost" size="sm" className="mt-1 justify-self-start" disabled={terms.fields.length <= 1} onClick={() => terms.remove(k)}>
             Remove<span className="sr-only"> {singular.toLowerCase()} {k + 1}</span>
           </Button>
         </div>
@@ -176,105 +247,9 @@ function TermList({
           {title} {sideError}
         </p>
       )}
-      <Button variant="secondary" size="sm" className="self-start" onClick={() => terms.append({ formula: '', phase: '', coef: '1' })}>
+      <Button variant="secondary" size="sm" className="self-start" onClick={() => terms.append({ formula: '', phase: '', coef: '1', massG: '' })}>
         Add a {singular.toLowerCase()}
       </Button>
     </fieldset>
   );
-}
-
-function ReactionResult({ result, stale }: { result: ReactionResponse; stale: boolean }) {
-  const { series, rules } = useMemo(() => dgCurves(result), [result]);
-  const t = formatQuantity(result.tempC, '°C', 1);
-  return (
-    <div className={cn('flex flex-col gap-5 transition-opacity', stale && 'opacity-60')}>
-      <dl className="grid grid-cols-3 gap-3">
-        <Figure label={`ΔH at ${t}`} value={formatQuantity(result.dH_kJ, 'kJ', 2)} />
-        <Figure label={`ΔS at ${t}`} value={result.dS_J_per_K === null ? 'no data' : formatQuantity(result.dS_J_per_K, 'J/K', 2)} />
-        <Figure label={`ΔG at ${t}`} value={result.dG_kJ === null ? 'no data' : formatQuantity(result.dG_kJ, 'kJ', 2)} />
-      </dl>
-      <p className="rounded-control bg-ink-50 px-3 py-2 text-body font-semibold text-ink-900">
-        {result.favourabilityText.charAt(0).toUpperCase() + result.favourabilityText.slice(1)}.
-        <span className="ml-1 font-normal text-ink-600">
-          {result.dH_kJ < 0 ? 'It releases heat (exothermic).' : 'It absorbs heat (endothermic).'}
-        </span>
-      </p>
-      {series.length > 0 ? (
-        <LineChart
-          title="ΔG against temperature"
-          description="Negative ΔG means the reaction as written is favourable in standard states."
-          series={series}
-          rules={rules}
-          x={{ label: 'Temperature', unit: '°C', format: (v) => formatNumber(v, { maxFractionDigits: 0 }) }}
-          y={{ label: 'ΔG', unit: 'kJ', includeZero: true, format: (v) => formatNumber(v, { maxFractionDigits: 1 }) }}
-          tableCaption="ΔG (kJ) against temperature (°C)"
-        />
-      ) : (
-        <EmptyState title="No ΔG curve">The species data lack an entropy, so ΔG cannot be computed.</EmptyState>
-      )}
-      <p className="text-caption text-ink-500">
-        Standard values at 25 °C: ΔH° {formatQuantity(result.dH298_kJ, 'kJ', 2)}, ΔS° {result.dS298_J_per_K === null ? '—' : formatQuantity(result.dS298_J_per_K, 'J/K', 2)}, ΔCp{' '}
-        {result.dCp_J_per_K === null ? '—' : formatQuantity(result.dCp_J_per_K, 'J/K', 2)}.
-        {result.crossoverKirchhoffC !== null && ` Crossover with ΔCp: ${formatQuantity(result.crossoverKirchhoffC, '°C', 0)}.`}
-      </p>
-      {result.warnings.length > 0 && (
-        <Alert tone="caution" title="Warnings">
-          <ul className="list-disc pl-4">
-            {result.warnings.map((w, k) => (
-              <li key={`${w.code}-${k}`}>{w.message}</li>
-            ))}
-          </ul>
-        </Alert>
-      )}
-      <details className="text-small">
-        <summary className="cursor-pointer font-semibold text-ink-700">Species used and their sources</summary>
-        <ul className="mt-2 flex flex-col gap-1 text-caption text-ink-600">
-          {result.terms.map((term) => (
-            <li key={term.key}>
-              <span className="font-mono font-semibold text-ink-800">{term.key}</span> ({term.name}, ν = {formatNumber(term.nu, { maxFractionDigits: 3 })}): {term.source}
-            </li>
-          ))}
-        </ul>
-      </details>
-    </div>
-  );
-}
-
-function Figure({ label, value }: { label: string; value: string }) {
-  return (
-    <div className="rounded-control border border-ink-100 bg-ink-50/50 px-3 py-2">
-      <dt className="text-caption font-semibold text-ink-500">{label}</dt>
-      <dd className="text-title font-extrabold tabular-nums text-ink-950">{value}</dd>
-    </div>
-  );
-}
-
-/** ΔG(T) with constant ΔH°, ΔS° and with the Kirchhoff correction, over a range that shows the crossover. */
-function dgCurves(result: ReactionResponse): { series: ChartSeries[]; rules: ChartRule[] } {
-  if (result.dS298_J_per_K === null) return { series: [], rules: [] };
-  const crossings = [result.crossoverC, result.crossoverKirchhoffC].filter((c): c is number => c !== null && c > -200 && c < 3000);
-  const lo = Math.max(-200, Math.min(0, result.tempC - 25));
-  const hi = Math.min(3000, Math.max(result.tempC + 100, 400, ...crossings.map((c) => c * 1.2 + 50)));
-  const steps = 120;
-  const temps = Array.from({ length: steps + 1 }, (_, k) => lo + ((hi - lo) * k) / steps);
-  const constant = temps.map((tc) => {
-    const T = tc + 273.15;
-    return { x: tc, y: result.dH298_kJ - (T * result.dS298_J_per_K!) / 1000 };
-  });
-  const series: ChartSeries[] = [{ id: 'constant', label: 'ΔG with constant ΔH°, ΔS°', tone: 'ink', points: constant }];
-  if (result.dCp_J_per_K !== null) {
-    series.push({
-      id: 'kirchhoff',
-      label: 'ΔG with ΔCp (Kirchhoff)',
-      tone: 'ember',
-      dashed: true,
-      points: temps.map((tc) => ({ x: tc, y: reactionAtTemperature(result, tc).dG_kJ ?? Number.NaN })),
-    });
-  }
-  const rules: ChartRule[] = [{ axis: 'y', value: 0, label: 'ΔG = 0', tone: 'rust' }];
-  if (result.crossoverC !== null && result.crossoverC > lo && result.crossoverC < hi) {
-    rules.push({ axis: 'x', value: result.crossoverC, label: `Crossover ${formatQuantity(result.crossoverC, '°C', 0)}`, tone: 'rust' });
-  }
-  rules.push({ axis: 'x', value: result.tempC, label: `${formatQuantity(result.tempC, '°C', 0)}`, tone: 'frost' });
-  return { series, rules };
 }

@@ -1,3 +1,4 @@
+import { hazardClassLabel } from '@shared/hazards/hazard-class-names';
 import type { CandidateHazards, HazardNote, HazardSeverity } from '@shared/schemas/hazards';
 import { Badge } from '@/components/ui/badge';
 import { cn } from '@/components/ui/cn';
@@ -15,6 +16,22 @@ export function StandingCaution({ text }: { text: string }) {
       <strong className="font-semibold">Standing caution. </strong>
       {text}
     </p>
+  );
+}
+
+/** The mixture's classification in CLP notation ("Ox. Sol. 3", "Eye Irrit. 2"), each with its H-statements and the rule that gave it. */
+export function ClassificationList({ classification }: { classification: CandidateHazards['classification'] }) {
+  if (classification.length === 0) return <p className="text-small text-ink-600">Not classified by the arithmetic rules.</p>;
+  return (
+    <ul className="flex flex-col gap-1.5 text-small" aria-label="Classification">
+      {classification.map((c) => (
+        <li key={`${c.hazardClass}-${c.category}`}>
+          <span className="font-semibold text-ink-900">{hazardClassLabel(c.hazardClass, c.category)}</span>
+          {c.hStatements.length > 0 && <span className="tabular-nums text-ink-700"> · {c.hStatements.join(', ')}</span>}
+          {c.rule && <span className="block text-caption text-ink-500">{c.rule}</span>}
+        </li>
+      ))}
+    </ul>
   );
 }
 

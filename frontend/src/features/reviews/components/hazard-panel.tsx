@@ -3,7 +3,7 @@ import { QueryError } from '@/components/ui/query-error';
 import { Loading } from '@/components/ui/spinner';
 import { useCandidateHazards } from '../api/get-candidate-hazards';
 import { useHStatements } from '../api/get-h-statements';
-import { HazardNotesList, LabelElements, StandingCaution } from './hazard-notes';
+import { ClassificationList, HazardNotesList, LabelElements, StandingCaution } from './hazard-notes';
 
 /** A candidate's computed hazard notes, its GHS label elements and the standing caution. */
 export function HazardPanel({ candidateId }: { candidateId: number }) {
@@ -24,6 +24,12 @@ export function HazardPanel({ candidateId }: { candidateId: number }) {
               <p className="text-small text-amber-700">No hazard data yet for: {q.data.ingredientsWithoutHazardData.join(', ')}. Their hazards are not counted.</p>
             )}
             <HazardNotesList notes={q.data.hazards.notes} />
+            <section aria-labelledby="classification-heading">
+              <h3 id="classification-heading" className="mb-2 text-body font-bold text-ink-900">
+                Classification (CLP)
+              </h3>
+              <ClassificationList classification={q.data.hazards.classification} />
+            </section>
             <section aria-labelledby="label-heading">
               <h3 id="label-heading" className="mb-2 text-body font-bold text-ink-900">
                 Label elements (GHS)

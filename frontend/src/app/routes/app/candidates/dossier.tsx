@@ -77,11 +77,23 @@ export default function DossierRoute() {
           <Button type="button" variant="secondary" onClick={() => window.print()} disabled={!q.data}>
             Print
           </Button>
-          <a className={buttonClasses('primary')} href={dossierPdfHref(id, paper)} download>
-            Download PDF
-          </a>
+          {q.data ? (
+            <a className={buttonClasses('primary')} href={dossierPdfHref(id, paper)} download>
+              Download PDF
+            </a>
+          ) : (
+            // Nothing to download until the dossier has been assembled (or when it could not be).
+            <Button type="button" variant="primary" disabled aria-describedby="pdf-why">
+              Download PDF
+            </Button>
+          )}
         </div>
       </div>
+      {!q.data && (
+        <p id="pdf-why" className="mb-3 text-caption text-ink-500">
+          {q.isError ? 'The PDF needs the dossier, which could not be loaded.' : 'The PDF can be downloaded once the dossier is assembled.'}
+        </p>
+      )}
       {q.isPending ? (
         <Loading label="Assembling the dossier…" />
       ) : q.isError ? (
