@@ -14,7 +14,8 @@ export default defineConfig({
     projects: [
       {
         resolve: { alias },
-        test: { name: 'unit', include: ['shared/**/*.test.ts', 'tests/unit/**/*.test.ts', 'tests/reference/**/*.test.ts', 'frontend/**/*.test.ts'], environment: 'node' },
+        // Reference checks run whole optimisations (every candidate simulated): 30 s each on 2 cores.
+        test: { name: 'unit', include: ['shared/**/*.test.ts', 'tests/unit/**/*.test.ts', 'tests/reference/**/*.test.ts', 'frontend/**/*.test.ts'], environment: 'node', testTimeout: 30_000 },
       },
       {
         resolve: { alias },

@@ -9,6 +9,8 @@
 //       (autocannon), against a throwaway PostgreSQL and server started here and removed after;
 //   (e) a small run on a fresh optimisation thread (as each run once started) against the
 //       process's long-lived thread;
+//   (f) the full run on libraries of 30, 100 and 300 actives (grades of the demo actives), the
+//       300/30 time ratio;
 // then the memory of this process (RSS, heap).
 import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -18,6 +20,7 @@ import { defaultChemistryLibrary } from '../shared/src/chemistry';
 import { DEMO_BRIEFS, DEMO_LIBRARY } from '../shared/src/optimiser/demo-library';
 import { briefSchema } from '../shared/src/schemas/briefs';
 import { optimiseOnThread, stopOptimiseThread } from '../backend/src/runs/optimise-pool';
+import { runLibraryScaleBench } from './bench/library-scale';
 import { runOptimiserBench } from './bench/optimiser';
 import { bin, freePort, root, runStep } from './lib/env';
 import { ensureDatabase, startPostgres, type LocalPostgres } from './lib/postgres';
@@ -46,11 +49,21 @@ row('javascript-lp-solver', `${ms(opt.highs.jsLpMs)} (${((opt.highs.jsLpMs / opt
 row('HiGHS (one persistent model reloaded per LP)', `${ms(opt.highs.highsMs)} (${((opt.highs.highsMs / opt.highs.lps) * 1000).toFixed(1)} µs/LP)`);
 row('time ratio HiGHS / javascript-lp-solver', opt.highs.ratioHighsOverJsLp.toFixed(2));
 row('largest relative difference of the optima', opt.highs.largestRelativeDifference.toExponential(2));
+
+// --- (f): library scale ------------------------------------------------------------------------
+console.log('[bench] library scale: 30, 100 and 300 actives ...');
+const scale = runLibraryScaleBench([30, 100, 300], () => undefined);
+section('(f) full run of the sideline compress on libraries of grades (every candidate simulated)');
+for (const p of scale.points) row(`${p.actives} actives: sets (full → pruned) / candidates / wall time`, `${p.setsEnumerated.toLocaleString('en')} → ${p.setsAfterPruning} / ${p.candidates} / ${ms(p.wallMs)}`);
+row('ratio of the 300 to the 30 time', scale.ratio300Over30.toFixed(2));
 section(`(c) brute force at 1 g — ${opt.grid.brief}`);
 row('grid points / grid time', `${opt.grid.points.toLocaleString('en')} / ${ms(opt.grid.gridMs)}`);
 row('LP of the same set', `${(opt.grid.lpMs * 1000).toFixed(0)} µs`);
 row('time ratio grid / LP', opt.grid.ratioGridOverLp.toExponential(2));
-row('LP optimum at least as good as the best grid point', `${opt.grid.lpAtLeastAsGood ? 'yes' : 'NO'} (LP ${opt.grid.lpObjective.toFixed(6)}, grid ${opt.grid.gridBest.toFixed(6)})`);
+row(
+  'LP optimum at least as good as the best grid point',
+  opt.grid.lpAtLeastAsGood === null ? `no feasible 1 g grid point (LP ${opt.grid.lpObjective.toFixed(6)})` : `yes (LP ${opt.grid.lpObjective.toFixed(6)}, grid ${opt.grid.gridBest.toFixed(6)})`,
+);
 
 // --- (d): evaluate latency over HTTP ---------------------------------------------------------
 console.log('[bench] POST /api/mixtures/evaluate: throwaway PostgreSQL and server ...');

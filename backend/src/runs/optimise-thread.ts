@@ -39,25 +39,37 @@ parentPort!.on('message', (request: OptimiseThreadRequest) => {
   try {
     const started = performance.now();
     let lastProgressAt = 0;
+    // Steps: sets solved + candidates simulated + sweep points, so the bar does not sit at 100 %
+    // while the sweep runs; the finished run reports the same count (run-executor.ts).
+    const range = sweepRange(input.brief);
+    const sweepSteps = range.points + 1;
+    const report = (done: number, total: number) => {
+      const now = performance.now();
+      if (done === total || now - lastProgressAt > 100) {
+        lastProgressAt = now;
+        post({ type: 'progress', done, total });
+      }
+    };
+    let runSteps = 0;
     const result = runOptimisation({
       brief: input.brief,
       ingredients: input.ingredients,
       chemistry: sameChemistry(input.chemistry),
       calibrations: input.calibrations ?? null,
       onProgress: (done: number, total: number) => {
-        const now = performance.now();
-        if (done === total || now - lastProgressAt > 100) {
-          lastProgressAt = now;
-          post({ type: 'progress', done, total });
-        }
+        runSteps = done;
+        report(done, total + sweepSteps);
       },
     });
     const optimiseMs = performance.now() - started;
     const sweep = sweepTarget(
       { brief: input.brief, ingredients: input.ingredients, chemistry: sameChemistry(input.chemistry), calibrations: input.calibrations ?? null },
-      sweepRange(input.brief),
+      range,
+      { run: result, onProgress: (done, total) => report(runSteps + done, runSteps + Math.max(total, sweepSteps)) },
     );
-    post({ type: 'result', result: { ...result, sweep }, elapsedMs: optimiseMs });
+    const steps = runSteps + sweep.points.length;
+    report(steps, steps);
+    post({ type: 'result', result: { ...result, sweep, stats: { ...result.stats, steps } }, elapsedMs: optimiseMs });
   } catch (error) {
     post({ type: 'error', message: error instanceof Error ? error.message : String(error) });
   }

@@ -63,8 +63,8 @@ export async function executeRun(runId: number): Promise<void> {
       {
         status: 'succeeded',
         result: rest,
-        progressDone: rest.stats.setsEnumerated,
-        progressTotal: rest.stats.setsEnumerated,
+        progressDone: rest.stats.steps ?? rest.stats.setsEnumerated,
+        progressTotal: rest.stats.steps ?? rest.stats.setsEnumerated,
         timings: { optimiseMs: Math.round(outcome.elapsedMs) },
         finishedAt: new Date(),
       },

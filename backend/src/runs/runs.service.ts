@@ -57,6 +57,8 @@ export function toOptimiserIngredient(r: IngredientRecord): OptimiserIngredient 
     densityGPerMl: r.densityGPerMl,
     ...(needs.length ? { needs } : {}),
     ...(extra.hazardClasses ? { hazardClasses: extra.hazardClasses } : {}),
+    // The hazard notes, score and excluded classes of a run read it (optimiser/candidate-hazards.ts).
+    ...(r.hazardData ? { hazardData: r.hazardData } : {}),
     version: r.version,
   };
 }

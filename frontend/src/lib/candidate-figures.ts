@@ -58,3 +58,36 @@ export const CONSTRAINT_WORDS: Record<string, string> = {
   'concentration-cap': 'concentration cap',
   'additive-ratio': 'additive ratio',
 };
+
+/**
+ * The one way a candidate is named on every screen: "C-14", with its place in its run where
+ * that matters ("C-14 · rank 1 in run 2"). The number is the candidate's own id (one base,
+ * counted from 1), never its rank.
+ */
+export function candidateRef(c: { id: number }): string {
+  return `C-${c.id}`;
+}
+
+export function candidateTitle(c: { id: number; rank: number; runId: number }): string {
+  return `${candidateRef(c)} · rank ${c.rank} in run ${c.runId}`;
+}
+
+/** What the ranked table's hazard column reads: the label's signal word and pictogram codes, and the flags a reviewer looks for first. */
+export function hazardSummary(c: Pick<Candidate, 'hazards' | 'hazardScore'>): { signalWord: string | null; pictograms: string[]; flags: string[]; score: number } {
+  const h = c.hazards;
+  if (!h) return { signalWord: null, pictograms: [], flags: [], score: c.hazardScore };
+  const flags: string[] = [];
+  if (h.notes.some((n) => n.ruleId.startsWith('precursor.'))) flags.push('explosives precursor');
+  if (h.classification.some((k) => k.hazardClass.startsWith('ox-'))) flags.push('oxidiser');
+  if (h.notes.some((n) => n.ruleId.startsWith('incompat.'))) flags.push('incompatible pair');
+  if (h.notes.some((n) => n.ruleId.startsWith('skin.') && (n.severity === 'warning' || n.severity === 'blocker'))) flags.push('skin temperature');
+  return { signalWord: h.label.signalWord, pictograms: h.label.pictograms, flags, score: h.score };
+}
+
+/** A simulated miss in a few words: "misses the brief: holds 17.6 of 20 min". */
+export function missSummary(c: Pick<Candidate, 'verification'>, holdMin: number): string {
+  const v = c.verification;
+  if (v.status === 'failed') return 'could not be simulated';
+  if (v.minutesInBand !== null && v.minutesInBand < holdMin - 0.05) return `misses the brief: holds ${v.minutesInBand.toFixed(1)} of ${holdMin} min`;
+  return `misses the brief: ${v.reasons[0] ?? 'see the reasons'}`;
+}

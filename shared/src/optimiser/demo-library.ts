@@ -1,4 +1,5 @@
 import { DEMO_WATER_KEY, demoOptimiserLibrary } from '../demo/ingredients';
+import { DEMO_HAZARD_DATA_BY_ID } from '../hazards/demo-hazard-data';
 import type { BriefInput } from '../schemas/briefs';
 import type { OptimiserIngredient } from './types';
 
@@ -8,9 +9,10 @@ import type { OptimiserIngredient } from './types';
  * resolve to the bundled NBS 1982 / CRC data), invented costs in the demo workspace's currency.
  * Ids are the records' stable demo keys ('ammonium-nitrate', 'iron-powder', ...).
  *
- * Costs are invented for the demo scenario and are not market prices.
+ * Each carries the demo hazard data the seed gives the same record, so runs on it rank by hazard
+ * as the app's runs do. Costs are invented for the demo scenario and are not market prices.
  */
-export const DEMO_LIBRARY: readonly OptimiserIngredient[] = demoOptimiserLibrary();
+export const DEMO_LIBRARY: readonly OptimiserIngredient[] = demoOptimiserLibrary().map((i) => ({ ...i, hazardData: DEMO_HAZARD_DATA_BY_ID[i.id] ?? null }));
 
 export const DEMO_WATER_ID = DEMO_WATER_KEY;
 

@@ -87,12 +87,14 @@ function elastic(model: LinearModel, relaxable: boolean[], counter?: LpCounter):
 
 function toBlocking(row: LinearConstraint, gap: number, relaxation: 'alone' | 'jointly'): BlockingConstraint {
   const inUnit = gap / row.unitStep;
-  return { constraintId: row.id, kind: row.kind, label: row.label, shortfall: inUnit, unit: row.unitLabel, relaxation };
+  // JSON has no Infinity: an unbounded shortfall is null and said in words by reasonText.
+  return { constraintId: row.id, kind: row.kind, label: row.label, shortfall: Number.isFinite(inUnit) ? inUnit : null, unit: row.unitLabel, relaxation };
 }
 
 function reasonText(blocking: BlockingConstraint[]): string {
   if (blocking.length === 0) return 'no mixture of this set meets the brief, and no single constraint explains it';
-  const fmt = (b: BlockingConstraint) => `${b.label} (short by ${b.shortfall.toPrecision(3)} ${b.unit})`;
+  const fmt = (b: BlockingConstraint) =>
+    b.shortfall === null ? `${b.label} (no amount of this set can meet it)` : `${b.label} (short by ${b.shortfall.toPrecision(3)} ${b.unit})`;
   const alone = blocking.filter((b) => b.relaxation === 'alone');
   if (alone.length) return `stopped by ${alone.map(fmt).join('; or by ')}`;
   return `stopped by ${blocking.map(fmt).join(' together with ')}`;

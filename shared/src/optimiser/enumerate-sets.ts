@@ -1,5 +1,6 @@
 import { hazardTags, isHazardCapToken } from '../hazards/optimiser-hazards';
 import type { Brief } from '../schemas/briefs';
+import { pruneDominated } from './dominance';
 import type { IngredientSet, OptimiserIngredient } from './types';
 
 /** An ingredient the enumeration left out, and why. */
@@ -46,6 +47,8 @@ export function enumerateSets(
   library: readonly OptimiserIngredient[],
   /** Returns null when the active can help this brief, else the reason it cannot. */
   isUseful: (i: OptimiserIngredient) => string | null,
+  /** Leave out actives a cheaper one with the same chemistry dominates (dominance.ts; default true). */
+  options: { pruneDominated?: boolean } = {},
 ): SetEnumeration {
   const byId = new Map(library.map((i) => [i.id, i]));
   const allowed = new Set(brief.allowedIngredientIds);
@@ -61,7 +64,7 @@ export function enumerateSets(
     if (hit.length) return `carries excluded hazard class ${hit.join(', ')}`;
     return null;
   };
-  const actives: OptimiserIngredient[] = [];
+  const usable: OptimiserIngredient[] = [];
   for (const i of [...library].sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0))) {
     if (i.role !== 'active') continue;
     if (allowed.size > 0 && !allowed.has(i.id)) continue;
@@ -87,7 +90,19 @@ export function enumerateSets(
       excluded.push({ ingredientId: i.id, name: i.name, reason: useless });
       continue;
     }
-    actives.push(i);
+    usable.push(i);
+  }
+  let actives = usable;
+  if (options.pruneDominated !== false) {
+    const pruned = pruneDominated(usable);
+    actives = pruned.kept;
+    for (const d of pruned.dominated) {
+      excluded.push({
+        ingredientId: d.ingredient.id,
+        name: d.ingredient.name,
+        reason: `same chemistry as ${d.by.name} at a higher cost per kg: every set with it is tried as the same set with ${d.by.name}`,
+      });
+    }
   }
   const sets: IngredientSet[] = [];
   const k = Math.min(brief.maxActives, actives.length);

@@ -69,6 +69,12 @@ export interface ThermalContext {
   surfaceLimitC: number | null;
   caps: ConcentrationCap[];
   objective: Brief['objective'];
+  /**
+   * Heat added to the heat-budget row's right-hand side, J (default 0): the correction a set's
+   * simulated shortfall asks for (run-optimisation.ts, "closing the loop"). The objective keeps
+   * the uncorrected budget, so objective values stay comparable across sets.
+   */
+  heatBudgetCorrectionJ?: number;
 }
 
 /**
@@ -411,7 +417,7 @@ export function buildLinearModel(set: IngredientSet, coefficients: IngredientCoe
     label: `heat ${ctx.packType === 'cold' ? 'absorbed' : 'released'} to reach ${tStar} °C and hold it ${ctx.holdS / 60} min`,
     coefficients: useful,
     sense: 'ge',
-    rhs: heatBudgetJ,
+    rhs: heatBudgetJ + (ctx.heatBudgetCorrectionJ ?? 0),
     unit: 'J',
     unitStep: 1000,
     unitLabel: 'kJ',

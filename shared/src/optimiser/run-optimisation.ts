@@ -10,6 +10,7 @@ import {
   type Verification,
 } from '../schemas/briefs';
 import type { ChemistryPort } from '../thermal/chemistry-port';
+import type { TimeProfileResult } from '../thermal/time-profile';
 import { REFERENCE_TEMP_C } from '../thermal/constants';
 import { diagnoseInfeasible } from './diagnose-infeasible';
 import { enumerateSets } from './enumerate-sets';
@@ -36,6 +37,11 @@ import { hazardCapsFor } from '../hazards/optimiser-hazards';
 import { hazardsOfCandidate } from './candidate-hazards';
 import { applyIngredientCalibrations, contactUaMultiplier, enthalpyFactorsBySolute, scaledEnthalpyPort, type ModelCalibrations } from '../calibration/calibrations';
 
+/** What a run is doing: solving the sets' LPs, simulating candidates, computing hazard notes. */
+export type RunStage = 'solving' | 'verifying' | 'hazards';
+/** Progress: `done` of `total` steps (sets solved + candidates simulated), and the stage. */
+export type ProgressCallback = (done: number, total: number, stage?: RunStage) => void;
+
 export interface RunOptimisationInput {
   /** A brief (parsed, or as written: it is parsed with briefSchema, defaults applied). */
   brief: Brief | BriefInput;
@@ -43,7 +49,7 @@ export interface RunOptimisationInput {
   /** Species data; ignored when `options.port` is given. */
   chemistry: ChemistryLibrary;
   /** Same as `options.onProgress` (either place works). */
-  onProgress?: (done: number, total: number) => void;
+  onProgress?: ProgressCallback;
   /** Same as `options.isCancelled`. */
   isCancelled?: () => boolean;
   /** Applied lab calibrations (lab-logs/calibrations.ts): UA per contact case, rate constants and enthalpy factors per ingredient. */
@@ -51,8 +57,8 @@ export interface RunOptimisationInput {
 }
 
 export interface RunOptimisationOptions {
-  /** Called after each set and each verification with (done, total). */
-  onProgress?: (done: number, total: number) => void;
+  /** Called after each set and each verification with (done, total) and what the run is doing. */
+  onProgress?: ProgressCallback;
   /** Checked before each set and each verification; true stops the run (status `cancelled`, partial results). */
   isCancelled?: () => boolean;
   /** How many of the best candidates to verify with the time model (default 20). */
@@ -68,6 +74,15 @@ export interface RunOptimisationOptions {
   iteration?: EnthalpyIterationOptions;
   /** Integrator tolerance of the verification (default 1e-5). */
   verifyRtol?: number;
+  /**
+   * `all` (default): simulate every distinct candidate. `best-passing`: simulate in objective
+   * order only until no later set can beat the best one that passed (a set's corrected optimum
+   * is never better than its first LP optimum, so the first LP objective bounds it): what the
+   * target sweep needs, the best objective that passes in simulation.
+   */
+  verifyMode?: 'all' | 'best-passing';
+  /** Leave out actives a cheaper one of the same chemistry dominates (dominance.ts); default true. Off only to check the pruning against full enumeration. */
+  pruneDominated?: boolean;
   /** Return the final LP of every set (`solvedSets`), for cross-checks; default false (the result stays small and clonable). */
   keepSolvedSets?: boolean;
 }
@@ -116,7 +131,7 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
   // Cap tokens among the excluded hazard classes (`precursor-an`, `cap:eye-dam-1`, …) become caps (hazards/optimiser-hazards.ts).
   const hazardCaps = hazardCapsFor(brief.excludedHazardClasses, input.ingredients);
   const ctx = thermalContext(brief, [...(options.extraCaps ?? []), ...hazardCaps], uaMultiplier);
-  const verifyTop = Math.max(0, options.verifyTop ?? 20);
+  const verifyTop = Math.max(0, options.verifyTop ?? Infinity);
   const counter: LpCounter = { count: 0 };
   const warnings = new Map<string, OptimiserWarning>();
   const addWarnings = (ws: readonly OptimiserWarning[], subject: string) => {
@@ -140,7 +155,7 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
     if (err) return `cannot be modelled: ${err}`;
     for (const n of i.needs ?? []) if (parseErrors.has(n.ingredientId)) return `needs ${n.ingredientId}, which cannot be modelled`;
     return uselessReason(parsed.get(i.id)!, ctx, port);
-  });
+  }, { pruneDominated: options.pruneDominated !== false });
 
   const sets = enumeration.sets;
   let total = sets.length + Math.min(verifyTop, sets.length);
@@ -163,7 +178,7 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
       const names = set.members.filter((m) => set.activeIds.includes(m.id)).map((m) => m.name);
       infeasible.push({ setIds: set.activeIds, setNames: names, blocking: [], reason: `cannot be modelled: ${(e as Error).message}` });
       done++;
-      options.onProgress?.(done, total);
+      options.onProgress?.(done, total, 'solving');
       continue;
     }
     solvedSets.push(it);
@@ -177,7 +192,7 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
       infeasible.push({ setIds: set.activeIds, setNames: activeNames(it.model), blocking: [], reason: 'infeasible (not diagnosed)' });
     }
     done++;
-    options.onProgress?.(done, total);
+    options.onProgress?.(done, total, 'solving');
   }
 
   // Ties to the simpler mixture: a set whose optimum leaves an active at 0 g is the simpler set.
@@ -189,32 +204,76 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
     if (!kept || w.setSize < kept.setSize) bestByKey.set(w.effectiveKey, w);
   }
   const keep = new Set(bestByKey.values());
-  const distinct = orderByObjective(working, brief.objective).filter((w) => keep.has(w));
+  let distinct = orderByObjective(working, brief.objective).filter((w) => keep.has(w));
 
+  // Every distinct candidate is simulated (verifyTop only bounds it for tests and benchmarks); a
+  // miss is corrected and solved again (closing the loop) before it is listed apart.
   let verified = 0;
+  let correctedSets = 0;
   const toVerify = distinct.slice(0, verifyTop);
   if (!cancelled) total = done + toVerify.length;
-  for (const w of toVerify) {
+  const simulate = (w: Working): { verification: Verification; profile: TimeProfileResult | null } => {
+    // The evaluation core applies the calibrations itself (over the uncalibrated port).
+    const lines = w.iterated.model.coefficients.map((c, i) => lineOf(c.ingredient, w.iterated.solution.massesG[i] ?? 0));
+    const { profile, evaluation: _evaluation, ...verification } = verifyComposition(basePort, brief, lines, {
+      ...(options.verifyRtol !== undefined ? { rtol: options.verifyRtol } : {}),
+      calibrations,
+    });
+    return { verification, profile };
+  };
+  const finalOf = new Map<Working, Working>();
+  const dir = brief.objective === 'most-hold-margin' ? -1 : 1;
+  let bestPassing: number | null = null;
+  for (const w0 of toVerify) {
     if (cancelled || options.isCancelled?.()) {
       cancelled = true;
       break;
     }
-    // The evaluation core applies the calibrations itself (over the uncalibrated port).
-    const lines = w.iterated.model.coefficients.map((c, i) => lineOf(c.ingredient, w.iterated.solution.massesG[i] ?? 0));
-    const v = verifyComposition(basePort, brief, lines, { ...(options.verifyRtol !== undefined ? { rtol: options.verifyRtol } : {}), calibrations });
-    const { profile, evaluation: _evaluation, ...verification } = v;
-    if (profile) {
-      addWarnings(profile.warnings, w.candidate.setNames.join(' + '));
-      w.candidate.warnings = dedupeWarnings([...w.candidate.warnings, ...profile.warnings]);
+    if (options.verifyMode === 'best-passing' && bestPassing !== null && dir * (w0.objectiveValue - bestPassing) >= 0) break;
+    const members = w0.iterated.set.members.map((m) => parsed.get(m.id)!);
+    let w = w0;
+    let v = simulate(w);
+    let rounds = 0;
+    let correctionJ = 0;
+    while (v.verification.status === 'missed' && rounds < MAX_CORRECTION_ROUNDS) {
+      const step = correctionStep(w.iterated.model, v.verification, brief);
+      if (step === null) break;
+      correctionJ += step;
+      rounds++;
+      let it: IteratedSet;
+      try {
+        it = solveSetIterated(w0.iterated.set, members, { ...ctx, heatBudgetCorrectionJ: correctionJ }, port, options.iteration, counter);
+      } catch {
+        break;
+      }
+      if (it.solution.status !== 'optimal') break;
+      const next = toWorking(it, ctx);
+      const nv = simulate(next);
+      // Keep the corrected optimum when it passes or misses by less; otherwise stop and list the
+      // set's first optimum (the correction bought nothing).
+      if (nv.verification.status === 'passed' || (nv.verification.status === 'missed' && (nv.verification.holdMarginMin ?? -Infinity) > (v.verification.holdMarginMin ?? -Infinity) + 1e-6)) {
+        w = next;
+        v = nv;
+      } else break;
     }
-    applyVerification(w, verification);
+    if (rounds > 0) correctedSets++;
+    w.candidate.correction = { rounds, heatBudgetCorrectionJ: w === w0 ? 0 : (w.iterated.model.context.heatBudgetCorrectionJ ?? 0), finalHoldMarginMin: v.verification.holdMarginMin };
+    if (v.profile) {
+      addWarnings(v.profile.warnings, w.candidate.setNames.join(' + '));
+      w.candidate.warnings = dedupeWarnings([...w.candidate.warnings, ...v.profile.warnings]);
+    }
+    applyVerification(w, v.verification);
     if (options.sensitivity !== false) {
       w.candidate.sensitivity = sensitivityOf(w.iterated.model, w.iterated.solution.binding, w.iterated.solution.objectiveValue, counter);
     }
+    finalOf.set(w0, w);
+    if (v.verification.status === 'passed' && (bestPassing === null || dir * (w.objectiveValue - bestPassing) < 0)) bestPassing = w.objectiveValue;
     verified++;
     done++;
-    options.onProgress?.(done, total);
+    options.onProgress?.(done, total, 'verifying');
   }
+  // Sets beyond verifyTop (tests and benchmarks only) or after a cancel stay as they were, not verified.
+  distinct = distinct.map((w) => finalOf.get(w) ?? w);
 
   // Hazard notes and score of every distinct candidate (verified temperatures where known); the score feeds ranking ties and the Pareto front.
   const byId = new Map(input.ingredients.map((i) => [i.id, i]));
@@ -257,10 +316,36 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
       feasibleSets: working.length,
       verified,
       unsettledSets: unsettled,
+      correctedSets,
+      steps: done,
     },
     warnings: runWarnings,
     ...(options.keepSolvedSets ? { solvedSets } : {}),
   };
+}
+
+/** Most times a missed set's heat budget is corrected and the set solved again. */
+export const MAX_CORRECTION_ROUNDS = 3;
+
+/**
+ * How much heat to add to a missed set's heat-budget row, J, from what the simulation found
+ * (DEVELOPERS.md, "Optimiser: closing the loop"): a short hold asks for its shortfall at the
+ * exchange rate at the target with 50 % to spare (the linear model leaks at the target for the
+ * whole hold, the simulated pack leaks more while it is colder or warmer than the target), a
+ * late or missed reach for a quarter of the budget; at least 5 % of the budget per round.
+ * Null when more heat cannot help: the miss is a surface limit (more heat makes it worse) or
+ * the simulation failed.
+ */
+export function correctionStep(model: LinearModel, v: Verification, brief: Brief): number | null {
+  if (v.status !== 'missed') return null;
+  const surface = v.reasons.some((r) => r.includes('surface limit'));
+  if (surface) return null;
+  const budget = Math.max(Math.abs(model.heatBudgetJ), 1);
+  let step = 0;
+  const shortMin = v.holdMarginMin !== null && v.holdMarginMin < 0 ? -v.holdMarginMin : 0;
+  if (shortMin > 0) step += 1.5 * shortMin * model.exchangeJPerMin;
+  if (v.timeToTargetMin === null || v.timeToTargetMin > brief.reachWithinMin) step += 0.25 * budget;
+  return Math.max(step, 0.05 * budget);
 }
 
 

@@ -387,6 +387,12 @@ export const candidateSchema = z.object({
   hazards: candidateHazardsSchema.optional(),
   sensitivity: z.array(sensitivitySchema),
   enthalpyIteration: z.object({ iterations: z.number().int(), settled: z.boolean(), lastRelativeChange: z.number() }),
+  /**
+   * Closing the loop: rounds in which the set's heat budget was raised by its simulated
+   * shortfall and the set solved again, the heat added (J, 0 when the first optimum was kept)
+   * and the simulated hold margin of the composition listed (min; negative: short).
+   */
+  correction: z.object({ rounds: z.number().int().min(0), heatBudgetCorrectionJ: z.number(), finalHoldMarginMin: z.number().nullable() }).optional(),
   warnings: z.array(z.object({ code: z.string(), message: z.string() })),
 });
 export type Candidate = z.infer<typeof candidateSchema>;
@@ -395,8 +401,12 @@ export const blockingConstraintSchema = z.object({
   constraintId: z.string(),
   kind: constraintKindSchema,
   label: z.string(),
-  /** How far the constraint must be relaxed for the set to become feasible, in `unit` (> 0). */
-  shortfall: z.number(),
+  /**
+   * How far the constraint must be relaxed for the set to become feasible, in `unit` (> 0);
+   * null when no finite relaxation would do (e.g. a power the film can never supply): the
+   * reason says so in words.
+   */
+  shortfall: z.number().nullable(),
   unit: z.string(),
   /** `alone`: relaxing this constraint alone by the shortfall makes the set feasible; `jointly`: together with the others listed. */
   relaxation: z.enum(['alone', 'jointly']),
@@ -427,6 +437,10 @@ export const optimisationResultSchema = z.object({
     feasibleSets: z.number().int(),
     verified: z.number().int(),
     unsettledSets: z.number().int(),
+    /** Missed sets whose heat budget was corrected by their simulated shortfall and solved again. */
+    correctedSets: z.number().int().optional(),
+    /** Steps the run's progress counted: sets solved + candidates simulated + target-sweep points. */
+    steps: z.number().int().optional(),
   }),
   warnings: z.array(z.object({ code: z.string(), message: z.string() })),
 });

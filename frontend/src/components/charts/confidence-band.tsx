@@ -10,6 +10,8 @@ export type ConfidenceBandProps = {
   nominal?: readonly { tMin: number; tempC: number }[];
   /** The brief's hold band (confidence.targetBand), shaded. */
   targetBand?: { minC: number; maxC: number } | null;
+  /** The nominal (as modelled) verdict, said beside the probability so the two never read as a contradiction. */
+  modelled?: 'passed' | 'missed' | 'failed' | 'not-verified';
   /** Share of samples meeting the brief, 0–1 (confidence.probabilityMeetsBrief). */
   probabilityMeetsBrief?: number | null;
   /** Monte Carlo samples behind the band (confidence.samples). */
@@ -27,14 +29,17 @@ const clampBand = (b: { minC: number; maxC: number }) => ({ from: Math.max(b.min
  * uncertainties (enthalpy, heat capacity, UA), the median and the nominal curve, the brief's band
  * and the probability of meeting the brief.
  */
-export function ConfidenceBand({ band, nominal, targetBand, probabilityMeetsBrief, samples, title = 'Predicted temperature with its 5–95 % band', height = 260, compact }: ConfidenceBandProps) {
+export function ConfidenceBand({ band, nominal, targetBand, probabilityMeetsBrief, samples, modelled, title = 'Predicted temperature with its 5–95 % band', height = 260, compact }: ConfidenceBandProps) {
   const p = probabilityMeetsBrief;
   const tone = p === null || p === undefined ? 'neutral' : p >= 0.9 ? 'success' : p >= 0.6 ? 'caution' : 'danger';
   return (
     <div className="flex flex-col gap-2">
       {p !== null && p !== undefined && (
         <p className="flex flex-wrap items-center gap-2 text-small text-ink-700">
-          <Badge tone={tone}>{Math.round(p * 100)} % chance of meeting the brief</Badge>
+          <Badge tone={tone}>
+            {modelled ? `${modelled === 'passed' ? 'Meets' : 'Misses'} the brief as modelled; ` : ''}
+            {Math.round(p * 100)} % of samples meet it under the model&apos;s uncertainty
+          </Badge>
           {!compact && samples ? <span className="text-caption text-ink-500">from {samples} Monte Carlo samples of the time model</span> : null}
         </p>
       )}

@@ -1,4 +1,5 @@
 import { useId, useMemo, useRef, useState, type KeyboardEvent } from 'react';
+import { Link, useNavigate } from 'react-router';
 import { line, symbol as d3symbol, symbolCircle, type SymbolType } from 'd3';
 import { Button } from '@/components/ui/button';
 import { cn } from '@/components/ui/cn';
@@ -35,6 +36,8 @@ export type ScatterChartProps = {
   selectedIds: ReadonlySet<string>;
   /** Click, Enter or Space on a point. */
   onToggle?: (id: string) => void;
+  /** The page of a point's record: a double-click or the O key opens it, and the table and readout link to it. */
+  hrefOf?: (id: string) => string;
   /** A line through some points (e.g. the 2-D trade-off front for the chosen axes), drawn dashed. */
   frontier?: readonly ChartPoint[];
   frontierLabel?: string;
@@ -61,6 +64,7 @@ export function ScatterChart({
   y: yAxis,
   selectedIds,
   onToggle,
+  hrefOf,
   frontier,
   frontierLabel,
   styleNotes,
@@ -68,6 +72,7 @@ export function ScatterChart({
   className,
 }: ScatterChartProps) {
   const id = useId();
+  const navigate = useNavigate();
   const { ref, width } = useWidth<HTMLDivElement>(640);
   const margin = DEFAULT_MARGIN;
   const finite = useMemo(() => points.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y)), [points]);
@@ -84,6 +89,7 @@ export function ScatterChart({
   const shown = hover ?? focusId;
   const active = shown ? finite.find((p) => p.id === shown) : undefined;
   const tabStop = focusId ?? order[0]?.id;
+  const focused = focusId ? finite.find((p) => p.id === focusId) : undefined;
 
   const frontierPath = useMemo(() => {
     if (!frontier || frontier.length < 2) return null;
@@ -106,6 +112,7 @@ export function ScatterChart({
     else if (event.key === 'Home') moveTo(0);
     else if (event.key === 'End') moveTo(order.length - 1);
     else if (event.key === 'Enter' || event.key === ' ') onToggle?.(p.id);
+    else if ((event.key === 'o' || event.key === 'O') && hrefOf) void navigate(hrefOf(p.id));
     else if (event.key === 'Escape') setFocusId(null);
     else return;
     event.preventDefault();
@@ -126,7 +133,7 @@ export function ScatterChart({
       </figcaption>
       {description && (
         <p id={`${id}-desc`} className="text-caption text-ink-500">
-          {description} Tab into the plot, move with the arrow keys, select with Enter.
+          {description} Tab into the plot, move with the arrow keys, select with Enter{hrefOf ? ', open with O or a double-click' : ''}.
         </p>
       )}
 
@@ -160,6 +167,7 @@ export function ScatterChart({
                       setFocusId(p.id);
                       onToggle?.(p.id);
                     }}
+                    onDoubleClick={hrefOf ? () => void navigate(hrefOf(p.id)) : undefined}
                     onKeyDown={(e) => onKeyDown(e, p)}
                     onFocus={() => setFocusId(p.id)}
                     onPointerEnter={() => setHover(p.id)}
@@ -212,10 +220,21 @@ export function ScatterChart({
                 {d}
               </p>
             ))}
-            <p className="mt-1 font-semibold text-frost-700">{selectedIds.has(active.id) ? 'Selected — click to deselect' : 'Click to select'}</p>
+            <p className="mt-1 font-semibold text-frost-700">
+              {selectedIds.has(active.id) ? 'Selected — click to deselect' : 'Click to select'}
+              {hrefOf ? '; double-click to open' : ''}
+            </p>
           </div>
         )}
       </div>
+
+      {hrefOf && focused && (
+        <p className="text-small">
+          <Link to={hrefOf(focused.id)} className="font-semibold text-frost-700 hover:underline">
+            Open {focused.label}
+          </Link>
+        </p>
+      )}
 
       <ul className="flex flex-wrap gap-x-4 gap-y-1 text-caption text-ink-700" aria-label="Legend">
         {groups.map((g) => (
@@ -278,7 +297,13 @@ export function ScatterChart({
               {order.map((p) => (
                 <tr key={p.id}>
                   <th scope="row" className="px-3 py-1 font-semibold">
-                    {p.label}
+                    {hrefOf ? (
+                      <Link to={hrefOf(p.id)} className="text-frost-700 hover:underline">
+                        {p.label}
+                      </Link>
+                    ) : (
+                      p.label
+                    )}
                   </th>
                   <td className="px-3 py-1">{formatX(p.x)}</td>
                   <td className="px-3 py-1">{formatY(p.y)}</td>

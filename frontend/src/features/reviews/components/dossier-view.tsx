@@ -99,7 +99,7 @@ export function DossierView({ dossier: d }: { dossier: Dossier }) {
           </div>
         )}
         <div className="mt-3 break-inside-avoid">
-          <CandidateConfidence candidateId={c.id} title="How sure the prediction is: 5–95 % band" height={220} />
+          <CandidateConfidence candidateId={c.id} title="How sure the prediction is: 5–95 % band" height={220} modelled={c.verification.status} />
         </div>
       </Section>
 

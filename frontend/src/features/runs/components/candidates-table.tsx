@@ -1,4 +1,5 @@
 import { useMemo, useState } from 'react';
+import { Link } from 'react-router';
 import {
   createColumnHelper,
   flexRender,
@@ -14,8 +15,9 @@ import { EmptyState } from '@/components/ui/empty-state';
 import {
   CONSTRAINT_WORDS,
   VERIFICATION_WORDS,
+  candidateRef,
   chemistryName,
-  extremeTempC,
+  hazardSummary,
   shortIngredientName,
 } from '@/lib/candidate-figures';
 import { formatMoney, formatNumber } from '@/lib/format';
@@ -64,7 +66,7 @@ export function CandidatesTable({
               checked={on}
               disabled={!on && full}
               onChange={() => onToggle(c.id)}
-              aria-label={`Select candidate ${c.rank} (${chemistryName(c)})`}
+              aria-label={`Select ${candidateRef(c)} (${chemistryName(c)})`}
               title={!on && full ? `At most ${MAX_SELECTED} at once` : undefined}
             />
           );
@@ -89,7 +91,9 @@ export function CandidatesTable({
         header: 'Chemistry',
         cell: ({ row, getValue }) => (
           <span>
-            <span className="font-semibold text-ink-900">{getValue()}</span>
+            <Link to={`/candidates/${row.original.id}`} className="font-semibold text-frost-700 hover:underline">
+              {candidateRef(row.original)} {getValue()}
+            </Link>
             {row.original.state === 'shortlisted' && (
               <Badge tone="success" className="ml-1.5">
                 Shortlisted
@@ -113,14 +117,14 @@ export function CandidatesTable({
           </ul>
         ),
       }),
-      col.accessor((c) => extremeTempC(c, packType), {
+      // Only simulated figures: a candidate that was not simulated shows none (the run lists none such).
+      col.accessor((c) => (cold ? c.predictedMinTempC : c.predictedMaxTempC) ?? Number.NaN, {
         id: 'extreme',
         header: cold ? 'Coldest (°C)' : 'Warmest (°C)',
         sortingFn: 'basic',
-        cell: ({ row, getValue }) => (
-          <span className="tabular-nums" title={row.original.predictedMinTempC === null ? 'Linear model, adiabatic (not verified)' : 'Time model'}>
-            {formatNumber(getValue(), { maxFractionDigits: 1 })}
-            {row.original.predictedMinTempC === null && <span className="text-ink-500">*</span>}
+        cell: ({ getValue }) => (
+          <span className="tabular-nums" title="Time model">
+            {Number.isFinite(getValue()) ? formatNumber(getValue(), { maxFractionDigits: 1 }) : '—'}
           </span>
         ),
       }),
@@ -137,6 +141,31 @@ export function CandidatesTable({
       col.accessor('unitCostValue', {
         header: `Cost (${currency})`,
         cell: ({ row }) => <span className="tabular-nums">{formatMoney(row.original.unitCost, currency)}</span>,
+      }),
+      col.accessor((c) => c.hazardScore, {
+        id: 'hazard',
+        header: 'Hazards',
+        sortingFn: 'basic',
+        cell: ({ row }) => {
+          const h = hazardSummary(row.original);
+          return (
+            <div className="flex max-w-56 flex-col gap-0.5 text-caption">
+              <span className="font-semibold text-ink-900">
+                {h.signalWord ?? 'No signal word'} · score {formatNumber(h.score, { maxFractionDigits: 1 })}
+              </span>
+              {h.pictograms.length > 0 && <span className="tabular-nums text-ink-700">{h.pictograms.join(' ')}</span>}
+              {h.flags.length > 0 && (
+                <ul className="flex flex-wrap gap-1">
+                  {h.flags.map((f) => (
+                    <li key={f} className="rounded-full bg-rust-50 px-2 py-0.5 font-semibold text-rust-700">
+                      {f}
+                    </li>
+                  ))}
+                </ul>
+              )}
+            </div>
+          );
+        },
       }),
       col.display({
         id: 'binding',
@@ -179,7 +208,7 @@ export function CandidatesTable({
         },
       }),
     ],
-    [selected, full, onToggle, cold, packType, currency],
+    [selected, full, onToggle, cold, currency],
   );
 
   // eslint-disable-next-line react-hooks/incompatible-library
@@ -201,7 +230,7 @@ export function CandidatesTable({
     );
 
   return (
-    <div className="-mx-5 max-h-[36rem] overflow-auto" tabIndex={0} aria-label="Ranked candidates, scrollable">
+    <div className="-mx-5 overflow-x-auto" tabIndex={0} aria-label="Ranked candidates, scrolls sideways">
       <table className="w-full min-w-[72rem] text-left text-small">
         <caption className="sr-only">Ranked candidates; column headers sort the table</caption>
         <thead className="sticky top-0 z-10 border-b border-ink-100 bg-surface text-caption font-bold text-ink-500">
@@ -258,8 +287,9 @@ export function CandidatesTable({
         </tbody>
       </table>
       <p className="px-5 pt-2 text-caption text-ink-500">
-        ◆ on the Pareto front over cost, mass, hold margin and hazard score. * linear-model estimate (adiabatic), not verified
-        with the time model. Misses are ranked below the candidates that meet the brief.
+        ◆ on the Pareto front over cost, mass, hold margin and hazard score. Every figure is from the time model under the
+        brief&apos;s conditions. Hazards: the mixture&apos;s GHS signal word and pictogram codes, and flags from the hazard notes
+        (open a candidate for the notes).
       </p>
     </div>
   );

@@ -37,7 +37,11 @@ export function InfeasibleSets({ sets, currency }: { sets: InfeasibleSet[]; curr
                   )}
                   <td className="px-3 py-2 text-ink-700">{b ? b.label : s.reason}</td>
                   <td className="px-3 py-2 text-right tabular-nums font-semibold text-rust-700">
-                    {b ? `${formatNumber(b.shortfall, { maxFractionDigits: b.shortfall < 10 ? 2 : 1 })}\u202f${unit(b.unit)}` : '—'}
+                    {b
+                      ? b.shortfall === null
+                        ? 'no amount of this set'
+                        : `${formatNumber(b.shortfall, { maxFractionDigits: b.shortfall < 10 ? 2 : 1 })}\u202f${unit(b.unit)}`
+                      : '—'}
                   </td>
                   <td className="px-5 py-2 text-ink-600">{b ? (b.relaxation === 'alone' ? 'enough on its own' : 'only with the others listed') : ''}</td>
                 </tr>

@@ -6,7 +6,7 @@ import { errorMessage } from '@/lib/api-client';
 import { formatNumber } from '@/lib/format';
 import { useCancelRun } from '../api/cancel-run';
 
-/** A queued or running run: sets done out of the total, and a way to stop it. */
+/** A queued or running run: steps done (sets solved, candidates simulated, sweep points) out of the total, and a way to stop it. */
 export function RunProgress({ run, canCancel }: { run: RunDetail; canCancel: boolean }) {
   const cancel = useCancelRun();
   const { done, total } = run.progress;
@@ -17,7 +17,7 @@ export function RunProgress({ run, canCancel }: { run: RunDetail; canCancel: boo
       <div className="flex flex-wrap items-center justify-between gap-3">
         <p className="flex items-center gap-2 font-semibold text-ink-800">
           <Spinner size="sm" className="text-frost-600" />
-          {queued ? 'Waiting for the optimiser to pick this run up…' : 'Solving the sets of actives…'}
+          {queued ? 'Waiting for the optimiser to pick this run up…' : 'Solving each set of actives, simulating every candidate, then sweeping the target…'}
         </p>
         {canCancel && (
           <Button variant="secondary" size="sm" onClick={() => cancel.mutate(run.id)} pending={cancel.isPending} pendingLabel="Cancelling…">
@@ -28,18 +28,18 @@ export function RunProgress({ run, canCancel }: { run: RunDetail; canCancel: boo
       <div>
         <div
           role="progressbar"
-          aria-label="Sets of actives solved"
+          aria-label="Run steps done"
           aria-valuemin={0}
           aria-valuemax={total || 1}
           aria-valuenow={done}
-          aria-valuetext={total ? `${done} of ${total} sets done` : 'starting'}
+          aria-valuetext={total ? `${done} of ${total} steps done` : 'starting'}
           className="h-3 w-full overflow-hidden rounded-full bg-ink-100"
         >
           <div className="h-full rounded-full bg-frost-500 transition-[width] duration-500" style={{ width: `${fraction * 100}%` }} />
         </div>
         <p className="mt-1.5 text-small tabular-nums text-ink-600" aria-live="polite">
           {total
-            ? `${formatNumber(done, { maxFractionDigits: 0 })} / ${formatNumber(total, { maxFractionDigits: 0 })} sets done (${formatNumber(fraction * 100, { maxFractionDigits: 0 })} %)`
+            ? `${formatNumber(done, { maxFractionDigits: 0 })} / ${formatNumber(total, { maxFractionDigits: 0 })} steps done (${formatNumber(fraction * 100, { maxFractionDigits: 0 })} %)`
             : 'Counting the sets of actives…'}
         </p>
       </div>

@@ -5,7 +5,8 @@ import { RunStatusBadge, isRunActive } from '@/components/status/run-status-badg
 import { Alert } from '@/components/ui/alert';
 import { ButtonLink } from '@/components/ui/button';
 import { Card, CardBody, CardHeader } from '@/components/ui/card';
-import { formatCount, formatDateTime, formatDuration } from '@/lib/format';
+import { candidateRef, chemistryName, missSummary } from '@/lib/candidate-figures';
+import { formatCount, formatDateTime, formatDuration, formatMoney, formatNumber } from '@/lib/format';
 import { CandidatesTable, MAX_SELECTED, rankedOrder } from './candidates-table';
 import { InfeasibleSets } from './infeasible-sets';
 import { RunProgress } from './run-progress';
@@ -26,6 +27,9 @@ export function RunView({
   selectionActions?: (selected: CandidateRecord[]) => ReactNode;
 }) {
   const ordered = useMemo(() => [...run.candidates].sort(rankedOrder), [run.candidates]);
+  // Only candidates that meet the brief in simulation are ranked; simulated misses are listed apart.
+  const passing = useMemo(() => ordered.filter((c) => c.verification.status === 'passed'), [ordered]);
+  const misses = useMemo(() => ordered.filter((c) => c.verification.status !== 'passed'), [ordered]);
   const [selectedIds, setSelectedIds] = useState<number[]>([]);
   const toggle = useCallback(
     (id: number) =>
@@ -34,7 +38,7 @@ export function RunView({
   );
   // The first candidate is in focus until someone chooses.
   const selected = selectedIds.map((id) => run.candidates.find((c) => c.id === id)).filter((c): c is CandidateRecord => !!c);
-  const focus = selected.length ? selected : ordered.slice(0, 1);
+  const focus = selected.length ? selected : passing.slice(0, 1);
   const active = isRunActive(run.status);
   const finished = run.status === 'succeeded' || (run.status === 'cancelled' && run.candidates.length > 0);
 
@@ -56,7 +60,7 @@ export function RunView({
         {run.stats && (
           <span className="tabular-nums">
             {formatCount(run.stats.setsEnumerated ?? 0, 'set')} tried · {formatCount(run.stats.feasibleSets ?? 0, 'feasible set')} ·{' '}
-            {formatCount(run.stats.verified ?? 0, 'verified candidate')}
+            {formatCount(run.stats.verified ?? 0, 'candidate')} simulated · {formatCount(passing.length, 'meets', 'meet')} the brief
           </span>
         )}
       </p>
@@ -85,8 +89,8 @@ export function RunView({
         <>
           <Card>
             <CardHeader
-              title="Ranked candidates"
-              description={`${formatCount(run.candidates.length, 'candidate')}. Select two to four to compare them; the plots follow your selection.`}
+              title="Candidates that meet the brief"
+              description={`${formatCount(passing.length, 'candidate')}, each simulated with the time model under the brief's conditions, ranked by the brief's objective. Select two to four to compare them; the plots follow your selection.`}
               action={
                 <div className="flex flex-wrap items-center gap-2" aria-live="polite">
                   <span className="text-small text-ink-600">{selected.length ? `${selected.length} selected` : 'None selected'}</span>
@@ -101,7 +105,7 @@ export function RunView({
             />
             <CardBody>
               <CandidatesTable
-                candidates={ordered}
+                candidates={passing}
                 packType={run.brief.packType}
                 currency={run.currency}
                 selectedIds={selectedIds}
@@ -110,8 +114,31 @@ export function RunView({
             </CardBody>
           </Card>
 
-          {run.candidates.length > 0 && (
-            <TradeOffView run={run} candidates={ordered} selectedIds={selectedIds} focus={focus} onToggle={toggle} />
+          {passing.length > 0 && <TradeOffView run={run} candidates={passing} selectedIds={selectedIds} focus={focus} onToggle={toggle} />}
+
+          {misses.length > 0 && (
+            <Card>
+              <CardHeader
+                title="Simulated, and missing the brief"
+                description="Sets the linear model finds feasible whose simulated pack misses the brief, even after their heat budget was corrected by the shortfall and solved again. Not ranked."
+              />
+              <CardBody>
+                <ul className="flex flex-col divide-y divide-ink-100 text-small">
+                  {misses.map((c) => (
+                    <li key={c.id} className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1 py-2">
+                      <Link to={`/candidates/${c.id}`} className="font-semibold text-frost-700 hover:underline">
+                        {candidateRef(c)} {chemistryName(c)}
+                      </Link>
+                      <span className="text-ink-700">{missSummary(c, run.brief.holdMin)}</span>
+                      <span className="tabular-nums text-ink-600">
+                        {formatMoney(c.unitCost, run.currency)} · {formatNumber(c.massG, { maxFractionDigits: 0 })}&#8239;g
+                        {c.correction && c.correction.rounds > 0 ? ` · corrected ${formatCount(c.correction.rounds, 'time')}, no composition of this set passed` : ''}
+                      </span>
+                    </li>
+                  ))}
+                </ul>
+              </CardBody>
+            </Card>
           )}
 
           <Card>

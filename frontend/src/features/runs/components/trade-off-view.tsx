@@ -9,7 +9,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { SelectField } from '@/components/ui/field';
 import { QueryError } from '@/components/ui/query-error';
 import { Loading } from '@/components/ui/spinner';
-import { VERIFICATION_WORDS, chemistryName, holdMarginMin, leadActive, objectiveUnitText } from '@/lib/candidate-figures';
+import { VERIFICATION_WORDS, candidateRef, chemistryName, holdMarginMin, leadActive, objectiveUnitText } from '@/lib/candidate-figures';
 import { briefBand, resampleCurve, useCandidateCurves, type Curve } from '@/lib/candidate-curves';
 import { formatMoney, formatNumber, formatQuantity } from '@/lib/format';
 import { parseSweep } from '../lib/sweep';
@@ -81,14 +81,14 @@ export function TradeOffView({
           x: xm.value(c) ?? Number.NaN,
           y: ym.value(c) ?? Number.NaN,
           group: leadActive(c),
-          label: `#${c.rank} ${chemistryName(c)}`,
+          label: `${candidateRef(c)} ${chemistryName(c)}`,
           details: [
             v.label + (c.pareto ? ' · Pareto front' : ''),
             `${formatMoney(c.unitCost, currency)} · ${formatQuantity(c.massG, 'g', 0)} · margin ${formatQuantity(margin, 'min')}`,
           ],
           emphasised: c.pareto,
           hollow: c.verification.status === 'missed' || c.verification.status === 'failed',
-          tag: selectedSet.has(String(c.id)) ? `#${c.rank}` : undefined,
+          tag: selectedSet.has(String(c.id)) ? candidateRef(c) : undefined,
         };
       }),
     [candidates, xm, ym, currency, selectedSet],
@@ -130,10 +130,10 @@ export function TradeOffView({
             <ScatterChart
               title={`${ym.label} against ${xm.label.toLowerCase()}`}
               description={`Each point is a candidate, coloured and shaped by its main active. ${xm.better === 'low' ? 'Left' : 'Right'} and ${ym.better === 'low' ? 'lower' : 'higher'} is better.${
-                (xId === 'hazard' || yId === 'hazard') && allHazardZero ? ' Hazard scores are 0 until the hazard notes score mixtures.' : ''
+                (xId === 'hazard' || yId === 'hazard') && allHazardZero ? ' No ingredient of these candidates carries hazard data, so every hazard score is 0.' : ''
               }${
                 marginShown
-                  ? ' Hold margin is the simulated time in the band beyond the hold (the linear estimate when not verified); the simulation runs for reach + 1.5 × hold, so margins top out near half the hold.'
+                  ? ' Hold margin is the simulated time in the band beyond the hold; the simulation runs for reach + 1.5 × hold, so margins top out near half the hold.'
                   : ''
               }`}
               points={points}
@@ -142,6 +142,7 @@ export function TradeOffView({
               y={yAxis}
               selectedIds={selectedSet}
               onToggle={(id) => onToggle(Number(id))}
+              hrefOf={(id) => `/candidates/${id}`}
               frontier={frontier}
               frontierLabel="best trade-off on these two axes"
               styleNotes={{ emphasised: 'Pareto front (all four figures)', hollow: 'misses the brief', selected: 'selected' }}
@@ -167,7 +168,7 @@ function CandidateCurves({ run, focus }: { run: RunDetail; focus: CandidateRecor
 
   const series: ChartSeries[] = focus.flatMap((c, k) => {
     const data = curves[k]?.data;
-    return data ? [{ id: String(c.id), label: `#${c.rank} ${chemistryName(c)}`, colour: CATEGORY_COLOURS[k % CATEGORY_COLOURS.length], dashed: k % 2 === 1, points: resampleCurve(data, step, horizon) }] : [];
+    return data ? [{ id: String(c.id), label: `${candidateRef(c)} ${chemistryName(c)}`, colour: CATEGORY_COLOURS[k % CATEGORY_COLOURS.length], dashed: k % 2 === 1, points: resampleCurve(data, step, horizon) }] : [];
   });
   const temps = series.flatMap((s) => s.points.map((p) => p.y));
   const lo = Math.min(brief.targetTempC, ...temps);
@@ -192,7 +193,7 @@ function CandidateCurves({ run, focus }: { run: RunDetail; focus: CandidateRecor
           {failed && <QueryError title="A curve could not be computed" error={failed.error} onRetry={() => void failed.refetch()} />}
           {pending && <Loading label="Running the thermal model for the selected candidates…" className="py-2" />}
           <LineChart
-            title={focus.length > 1 ? 'Temperature of the selected candidates' : `Temperature of #${focus[0]!.rank} ${chemistryName(focus[0]!)}`}
+            title={focus.length > 1 ? 'Temperature of the selected candidates' : `Temperature of ${candidateRef(focus[0]!)} ${chemistryName(focus[0]!)}`}
             description={`The time model from activation, against the brief's band (shaded). ${focus.length > 1 ? '' : 'Select more candidates to overlay them.'}`}
             series={series}
             bands={bands}
@@ -201,7 +202,7 @@ function CandidateCurves({ run, focus }: { run: RunDetail; focus: CandidateRecor
             y={{ label: 'Temperature', unit: '°C', format: (v) => formatNumber(v, { maxFractionDigits: 1 }) }}
             tableCaption="Temperature (°C) against time (min) of the selected candidates"
           />
-          <CandidateConfidence candidateId={focus[0]!.id} title={`How sure: #${focus[0]!.rank} ${chemistryName(focus[0]!)}, 5–95 % band`} height={220} />
+          <CandidateConfidence candidateId={focus[0]!.id} modelled={focus[0]!.verification.status} title={`How sure: ${candidateRef(focus[0]!)} ${chemistryName(focus[0]!)}, 5–95 % band`} height={220} />
         </>
       )}
     </div>
@@ -230,13 +231,13 @@ function Sensitivity({ run, focus }: { run: RunDetail; focus: CandidateRecord[] 
         <SelectField label="Sensitivity of" controlSize="sm" value={candidate.id} onChange={(e) => setChosen(Number(e.target.value))} containerClassName="max-w-sm">
           {focus.map((c) => (
             <option key={c.id} value={c.id}>
-              #{c.rank} {chemistryName(c)}
+              {candidateRef(c)} {chemistryName(c)}
             </option>
           ))}
         </SelectField>
       )}
       <BarChart
-        title={`What relaxing each binding constraint buys · #${candidate.rank}`}
+        title={`What relaxing each binding constraint buys · ${candidateRef(candidate)}`}
         description={`Change of the objective (${objUnit}) when a binding constraint is relaxed by one of its own units, re-solved. Units differ per row; compare within a row.`}
         bars={bars}
         x={{ label: 'Objective change per unit relaxed', unit: `${objUnit} per unit` }}
@@ -273,8 +274,8 @@ function TargetSweep({ run }: { run: RunDetail }) {
   return (
     <LineChart
       title={`Target sweep: best objective against ${byTemp ? 'target temperature' : 'hold time'}`}
-      description={`The linear model's best ${objUnit ? `(${objUnit}) ` : ''}at each ${byTemp ? 'target' : 'hold time'}, other limits as in the brief.${
-        infeasible ? ` ${infeasible} of ${sweep.points.length} values had no feasible set and are left out.` : ''
+      description={`The best objective ${objUnit ? `(${objUnit}) ` : ''}among sets that meet the brief in simulation at each ${byTemp ? 'target' : 'hold time'}, other limits as in the brief; at this brief's own value it is rank 1.${
+        infeasible ? ` ${infeasible} of ${sweep.points.length} values had no set that meets the brief and are left out.` : ''
       }`}
       series={series}
       rules={[{ axis: 'x', value: current, label: `this brief: ${formatQuantity(current, byTemp ? '°C' : 'min')}`, tone: 'ember' }]}

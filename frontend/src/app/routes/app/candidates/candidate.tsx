@@ -149,7 +149,7 @@ export default function CandidateRoute() {
           <Card>
             <CardHeader title="How sure the prediction is" description="Monte Carlo over the uncertainties of enthalpy, heat capacity and heat exchange." />
             <CardBody>
-              <CandidateConfidence candidateId={c.id} compact height={220} />
+              <CandidateConfidence candidateId={c.id} compact height={220} modelled={c.verification.status} />
             </CardBody>
           </Card>
           <HazardPanel candidateId={c.id} />
