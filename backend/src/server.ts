@@ -10,6 +10,7 @@ import { closeMailer, useMailSink } from './mail/mailer';
 import { startMailSink, type MailSink } from './mail/mail-sink';
 import { executeRun } from './runs/run-executor';
 import { startRunWorker, stopRunQueue } from './runs/run-queue';
+import { startRunSweeper, stopRunSweeper } from './runs/run-sweeper';
 
 export interface RunningServer {
   url: string;
@@ -42,6 +43,8 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
   }
 
   if (options.worker ?? config.workerEnabled) await startRunWorker(({ runId }) => executeRun(runId));
+  // Every process looks for runs whose worker died, whether or not it serves the queue itself.
+  startRunSweeper();
 
   const app = createApp(options);
   const server: Server = await new Promise((resolve, reject) => {
@@ -60,6 +63,7 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
       server.closeAllConnections?.();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await sink?.close();
+      await stopRunSweeper();
       await stopRunQueue();
       closeMailer();
       await sequelize.close();
