@@ -74,6 +74,8 @@ function loadConfig() {
       /** The local sink runs whenever no real SMTP server is configured and we are not in production. */
       sinkEnabled: !smtpConfigured && env.NODE_ENV !== 'production',
       sinkPort: env.MAIL_SINK_PORT,
+      /** Only the default port gives way to a free one when taken; a port that was asked for must be had. */
+      sinkPortExplicit: process.env.MAIL_SINK_PORT !== undefined,
     },
     loginRateLimit: { limit: env.LOGIN_RATE_LIMIT, windowMs: env.LOGIN_RATE_WINDOW_MS },
     workerEnabled: env.WORKER_ENABLED === 'true',

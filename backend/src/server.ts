@@ -38,8 +38,9 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
 
   let sink: MailSink | null = null;
   if (config.mail.sinkEnabled) {
-    sink = await startMailSink(config.mail.sinkPort);
-    useMailSink(sink.port);
+    // A second instance on this machine finds the default port taken and takes a free one.
+    sink = await startMailSink(config.mail.sinkPort, { fallbackWhenBusy: !config.mail.sinkPortExplicit });
+    useMailSink(sink.port, sink.auth);
   }
 
   if (options.worker ?? config.workerEnabled) await startRunWorker(({ runId }) => executeRun(runId));

@@ -37,7 +37,7 @@ export function useHarness(): Harness {
     const { startMailSink } = await import('../../../backend/src/mail/mail-sink');
     const { useMailSink } = await import('../../../backend/src/mail/mailer');
     const sink = await startMailSink(0);
-    useMailSink(sink.port);
+    useMailSink(sink.port, sink.auth);
     state.closeSink = sink.close;
     state.mailSinkPort = sink.port;
     state.app = createApp({ staticDir: null });
