@@ -2,13 +2,20 @@
 // the local mail sink, a fresh front-end build, and the app on http://127.0.0.1:$PORT.
 import path from 'node:path';
 import { buildFrontendIfStale, root } from './lib/env';
-import { ensureDatabase, startPostgres } from './lib/postgres';
+import { ensureDatabase, startPostgres, type LocalPostgres } from './lib/postgres';
 
 const dataDir = process.env.DATA_DIR ?? path.join(root, '.data');
 const pgPort = Number(process.env.PGPORT ?? 54329);
 const database = process.env.PGDATABASE ?? 'packwright';
 
-const pg = startPostgres({ dataDir: path.join(dataDir, 'pg'), port: pgPort, passwordFile: path.join(dataDir, 'pg-password') });
+let pg: LocalPostgres;
+try {
+  pg = startPostgres({ dataDir: path.join(dataDir, 'pg'), port: pgPort, passwordFile: path.join(dataDir, 'pg-password') });
+} catch (error) {
+  // A problem the user can act on, in a line or two, not a stack trace.
+  console.error(error instanceof Error ? error.message : error);
+  process.exit(1);
+}
 let stopping = false;
 async function stopDatabase() {
   if (pg.startedHere) {

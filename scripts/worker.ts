@@ -19,11 +19,15 @@ if (!process.env.DATABASE_URL) {
 
 const { executeRun } = await import('../backend/src/runs/run-executor');
 const { startRunWorker, stopRunQueue } = await import('../backend/src/runs/run-queue');
+const { startRunSweeper, stopRunSweeper } = await import('../backend/src/runs/run-sweeper');
 const { sequelize } = await import('../backend/src/db/sequelize');
 await sequelize.authenticate();
 await startRunWorker(({ runId }) => executeRun(runId));
+// Re-queues (or fails) runs whose worker stopped sending heartbeats, whichever process that was.
+startRunSweeper();
 console.log(`[worker ${process.pid}] serving optimisation runs`);
 const stop = async () => {
+  await stopRunSweeper();
   await stopRunQueue();
   await sequelize.close();
   process.exit(0);

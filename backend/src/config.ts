@@ -42,6 +42,9 @@ const envSchema = z.object({
   RUN_RETRY_LIMIT: z.coerce.number().int().min(0).max(10).default(2),
   RUN_POLLING_SECONDS: z.coerce.number().min(0.5).default(1),
   RUN_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(30),
+  RUN_HEARTBEAT_SECONDS: z.coerce.number().min(0.2).default(5),
+  RUN_STALE_SECONDS: z.coerce.number().min(1).default(30),
+  RUN_SWEEP_SECONDS: z.coerce.number().min(0.5).default(10),
   RUN_QUEUE: z.string().regex(/^[\w.-]{1,60}$/, 'RUN_QUEUE must be letters, digits, . _ or -').default('optimisation-run'),
 });
 
@@ -88,6 +91,8 @@ function loadConfig() {
       /** pg-boss queue of mail sent in the background (password-reset links), and its retries. */
       queueName: env.MAIL_QUEUE,
       retryLimit: env.MAIL_RETRY_LIMIT,
+      /** Only the default port gives way to a free one when taken; a port that was asked for must be had. */
+      sinkPortExplicit: process.env.MAIL_SINK_PORT !== undefined,
     },
     /** Failed sign-ins allowed per address and per client within the window (auth/login-limiter.ts). */
     loginRateLimit: { perAddress: env.LOGIN_RATE_LIMIT, perClient: env.LOGIN_CLIENT_RATE_LIMIT, windowMs: env.LOGIN_RATE_WINDOW_MS },
@@ -100,6 +105,12 @@ function loadConfig() {
       retryLimit: env.RUN_RETRY_LIMIT,
       pollingSeconds: env.RUN_POLLING_SECONDS,
       maintenanceSeconds: env.RUN_MAINTENANCE_SECONDS,
+      /** The executing worker writes the run's heartbeat this often. */
+      heartbeatSeconds: env.RUN_HEARTBEAT_SECONDS,
+      /** A running run whose heartbeat is older than this is taken as lost: re-queued, or failed with no attempts left. */
+      staleSeconds: Math.max(env.RUN_STALE_SECONDS, env.RUN_HEARTBEAT_SECONDS * 3),
+      /** How often every app and worker process looks for lost runs. */
+      sweepSeconds: env.RUN_SWEEP_SECONDS,
       /** Name of the pg-boss queue; environments sharing a database can keep their runs apart. */
       queueName: env.RUN_QUEUE,
     },

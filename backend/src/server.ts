@@ -11,6 +11,7 @@ import { startMailSink, type MailSink } from './mail/mail-sink';
 import { startMailWorker } from './mail/mail-queue';
 import { executeRun } from './runs/run-executor';
 import { startRunWorker, stopRunQueue } from './runs/run-queue';
+import { startRunSweeper, stopRunSweeper } from './runs/run-sweeper';
 
 export interface RunningServer {
   url: string;
@@ -38,11 +39,14 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
 
   let sink: MailSink | null = null;
   if (config.mail.sinkEnabled) {
-    sink = await startMailSink(config.mail.sinkPort);
-    useMailSink(sink.port);
+    // A second instance on this machine finds the default port taken and takes a free one.
+    sink = await startMailSink(config.mail.sinkPort, { fallbackWhenBusy: !config.mail.sinkPortExplicit });
+    useMailSink(sink.port, sink.auth);
   }
 
   if (options.worker ?? config.workerEnabled) await startRunWorker(({ runId }) => executeRun(runId));
+  // Every process looks for runs whose worker died, whether or not it serves the queue itself.
+  startRunSweeper();
 
   // The app builds its routes (and registers their mail jobs) before the mail worker starts.
   const app = createApp(options);
@@ -64,6 +68,7 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
       server.closeAllConnections?.();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await sink?.close();
+      await stopRunSweeper();
       await stopRunQueue();
       closeMailer();
       await sequelize.close();

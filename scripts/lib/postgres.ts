@@ -1,5 +1,5 @@
 import { execFileSync, spawnSync } from 'node:child_process';
-import { randomBytes } from 'node:crypto';
+import { createHash, randomBytes } from 'node:crypto';
 import { accessSync, chmodSync, constants, existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -70,17 +70,41 @@ function postgresCanReach(dir: string): boolean {
 }
 
 /**
+ * The folder outside the checkout for a cluster whose preferred folder the postgres user cannot
+ * reach: named after a hash of the preferred folder's ABSOLUTE path, so every clone (and every
+ * DATA_DIR) has a cluster of its own.
+ */
+export function fallbackClusterDir(preferred: string, base = '/var/tmp'): string {
+  const digest = createHash('sha256').update(path.resolve(preferred)).digest('hex').slice(0, 16);
+  return path.join(base, `packwright-pg-${digest}`);
+}
+
+/**
  * Chooses where the cluster lives. As root the postgres user must be able to traverse the path;
  * when a parent (say /root) is closed to it, the cluster lives under /var/tmp and the project's
- * folder keeps a note of where.
+ * folder keeps a note of where (`pg-location` beside the preferred folder).
  */
 function resolveClusterDir(preferred: string): string {
   mkdirSync(path.dirname(preferred), { recursive: true });
   if (postgresCanReach(path.dirname(preferred))) return preferred;
-  const fallback = path.join('/var/tmp', `packwright-pg-${Buffer.from(preferred).toString('hex').slice(-24)}`);
+  const fallback = fallbackClusterDir(preferred);
+  // Earlier versions named the folder after the path's last 12 characters, shared by every clone.
+  const shared = path.join('/var/tmp', `packwright-pg-${Buffer.from(preferred).toString('hex').slice(-24)}`);
+  if (!existsSync(fallback) && existsSync(path.join(shared, 'PG_VERSION'))) {
+    console.log(`[db] ${shared} is a cluster that clones used to share; this clone now keeps its own (remove the old one once no clone needs it)`);
+  }
   console.log(`[db] the postgres user cannot reach ${path.dirname(preferred)}; keeping the cluster in ${fallback}`);
+  writeFileSync(path.join(path.dirname(preferred), 'pg-location'), `${fallback}\n`);
   return fallback;
 }
+
+/** The one line said when a cluster exists but the password it was made with is gone. */
+export function missingPasswordMessage(dataDir: string, passwordFile: string): string {
+  return `[db] The PostgreSQL cluster in ${dataDir} exists but its password file ${passwordFile} is missing: restore that file, or remove ${dataDir} to start over with a fresh demo database.`;
+}
+
+/** A start-up problem the user can fix: printed as its message, without a stack trace. */
+export class SetupError extends Error {}
 
 export interface StartPostgresOptions {
   /** Folder for the cluster (created on first use). */
@@ -91,9 +115,10 @@ export interface StartPostgresOptions {
 }
 
 export function startPostgres(options: StartPostgresOptions): LocalPostgres {
-  const bin = ensurePostgresBinaries();
   const dataDir = resolveClusterDir(options.dataDir);
   const passwordFile = options.passwordFile ?? path.join(path.dirname(options.dataDir), 'pg-password');
+  if (existsSync(path.join(dataDir, 'PG_VERSION')) && !existsSync(passwordFile)) throw new SetupError(missingPasswordMessage(dataDir, passwordFile));
+  const bin = ensurePostgresBinaries();
 
   if (!existsSync(path.join(dataDir, 'PG_VERSION'))) {
     const password = existsSync(passwordFile) ? readFileSync(passwordFile, 'utf8').trim() : randomBytes(18).toString('base64url');

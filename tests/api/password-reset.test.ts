@@ -121,7 +121,7 @@ describe('the mail job retries', () => {
     const { useMailSink } = await import('../../backend/src/mail/mailer');
     const { freePort } = await import('../../scripts/lib/env');
     // Point the transport at a port where nothing listens: the first attempt fails.
-    useMailSink(await freePort());
+    useMailSink(await freePort(), h.mailSinkAuth);
     try {
       await request(h.app).post('/api/auth/password-reset').send({ email });
       const { PasswordResetTokenRecord } = await import('../../backend/src/auth/password-reset-token.model');
@@ -134,7 +134,7 @@ describe('the mail job retries', () => {
       await new Promise((r) => setTimeout(r, 500));
       expect(await h.mailFor(email).then((m) => m.filter((x) => /reset/i.test(x.subject)).length)).toBe(0);
     } finally {
-      useMailSink(h.mailSinkPort);
+      useMailSink(h.mailSinkPort, h.mailSinkAuth);
     }
     const mail = await waitForMailMatching(h, email, /reset/i, 1, 20_000);
     const { PasswordResetTokenRecord } = await import('../../backend/src/auth/password-reset-token.model');

@@ -1,6 +1,10 @@
 import nodemailer, { type Transporter } from 'nodemailer';
 import { config } from '../config';
 
+/**
+ * Names the workspace a message is about. The local sink files mail by recipient; this header
+ * only picks among the recipient's own workspaces when the address has several.
+ */
 export const WORKSPACE_HEADER = 'X-Packwright-Workspace';
 
 export interface OutgoingMail {
@@ -8,16 +12,17 @@ export interface OutgoingMail {
   subject: string;
   text: string;
   html?: string;
-  /** Tags the message so the local sink can show it to that workspace's admins only. */
+  /** The workspace the message is about (see WORKSPACE_HEADER). */
   workspaceId?: number;
 }
 
 let transporter: Transporter | null = null;
-let sinkPort: number | null = null;
+let sink: { port: number; auth: { user: string; pass: string } } | null = null;
 
-/** Points the transport at the local mail sink once it is listening (development and tests). */
-export function useMailSink(port: number): void {
-  sinkPort = port;
+/** Points the transport at the local mail sink once it is listening, with its generated credentials (development and tests). */
+export function useMailSink(port: number, auth: { user: string; pass: string }): void {
+  sink = { port, auth };
+  transporter?.close();
   transporter = null;
 }
 
@@ -26,8 +31,8 @@ function getTransporter(): Transporter {
   if (config.mail.smtp) {
     const { host, port, user, pass } = config.mail.smtp;
     transporter = nodemailer.createTransport({ host, port, secure: port === 465, auth: user ? { user, pass } : undefined });
-  } else if (sinkPort !== null) {
-    transporter = nodemailer.createTransport({ host: '127.0.0.1', port: sinkPort, secure: false, ignoreTLS: true });
+  } else if (sink !== null) {
+    transporter = nodemailer.createTransport({ host: '127.0.0.1', port: sink.port, secure: false, ignoreTLS: true, auth: { ...sink.auth } });
   } else {
     throw new Error('No mail transport: set SMTP_HOST, or start the local mail sink (development and tests).');
   }

@@ -1,4 +1,5 @@
 import PgBoss from 'pg-boss';
+import type { Transaction } from 'sequelize';
 import { config } from '../config';
 
 /** One pg-boss queue carries optimisation runs; any number of worker processes may serve it. */
@@ -48,6 +49,29 @@ export async function enqueueRun(runId: number): Promise<string | null> {
 export async function cancelRunJob(jobId: string): Promise<void> {
   const boss = await getBoss();
   await boss.cancel(RUN_QUEUE, jobId);
+}
+
+/** Lets pg-boss write inside a Sequelize transaction (its own SQL, on the transaction's connection). */
+function onTransaction(transaction: Transaction): PgBoss.Db {
+  const connection = (transaction as unknown as { connection?: { query(text: string, values: unknown[]): Promise<{ rows: unknown[] }> } }).connection;
+  if (!connection) throw new Error('the transaction has no connection');
+  return { executeSql: (text, values) => connection.query(text, values) as Promise<{ rows: never[] }> };
+}
+
+/**
+ * Inside `transaction`: cancels a lost run's old job (its worker is gone) and sends a new one, so
+ * the re-queued run and its job are committed together. Answers the new job's id.
+ */
+export async function resendRunJob(runId: number, oldJobId: string | null, transaction: Transaction): Promise<string | null> {
+  const boss = await getBoss();
+  const db = onTransaction(transaction);
+  if (oldJobId) await boss.cancel(RUN_QUEUE, oldJobId, { db });
+  return boss.send(RUN_QUEUE, { runId } satisfies RunJobData, {
+    retryLimit: config.runs.retryLimit,
+    retryDelay: 1,
+    expireInSeconds: config.runs.expireSeconds,
+    db,
+  });
 }
 
 /** Serves the queue in this process: one run at a time per worker. */

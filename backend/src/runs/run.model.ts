@@ -36,6 +36,15 @@ export class RunRecord extends Model<InferAttributes<RunRecord>, InferCreationAt
   declare createdById: number | null;
   declare startedAt: CreationOptional<Date | null>;
   declare finishedAt: CreationOptional<Date | null>;
+  /** Written by the executing worker every few seconds; stale means the worker is gone (run-sweeper.ts). */
+  declare heartbeatAt: CreationOptional<Date | null>;
+  /** How often the run's worker stopped responding and the run was re-queued or failed. */
+  declare interruptions: CreationOptional<number>;
+  /** The process (host:pid) executing the current attempt. */
+  declare workerId: CreationOptional<string | null>;
+  /** The queue (RUN_QUEUE) of the worker executing it. */
+  declare queueName: CreationOptional<string | null>;
+  declare lastInterruptedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare createdBy?: NonAttribute<UserRecord | null>;
@@ -60,6 +69,11 @@ RunRecord.init(
     createdById: { type: DataTypes.INTEGER, allowNull: true },
     startedAt: { type: DataTypes.DATE, allowNull: true },
     finishedAt: { type: DataTypes.DATE, allowNull: true },
+    heartbeatAt: { type: DataTypes.DATE, allowNull: true },
+    interruptions: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+    workerId: { type: DataTypes.STRING(120), allowNull: true },
+    queueName: { type: DataTypes.STRING(60), allowNull: true },
+    lastInterruptedAt: { type: DataTypes.DATE, allowNull: true },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

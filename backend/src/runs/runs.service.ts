@@ -15,6 +15,7 @@ import { Workspace } from '../workspaces/workspace.model';
 import { RunRecord, type RunDataSnapshot } from './run.model';
 import { activeCalibrations } from '../lab-logs/lab-logs.service';
 import { cancelRunJob, enqueueRun } from './run-queue';
+import { maxRunAttempts } from './run-sweeper';
 
 export function toRunSummary(run: RunRecord): RunSummary {
   return {
@@ -25,6 +26,10 @@ export function toRunSummary(run: RunRecord): RunSummary {
     progress: { done: run.progressDone, total: run.progressTotal },
     error: run.error,
     attempts: run.attempts,
+    maxAttempts: maxRunAttempts(),
+    interruptions: run.interruptions,
+    lastInterruptedAt: run.lastInterruptedAt ? run.lastInterruptedAt.toISOString() : null,
+    silentForS: run.status === 'running' && run.heartbeatAt ? Math.max(0, Math.round((Date.now() - run.heartbeatAt.getTime()) / 1000)) : null,
     createdBy: run.createdBy?.name ?? '',
     createdAt: run.createdAt.toISOString(),
     startedAt: run.startedAt ? run.startedAt.toISOString() : null,

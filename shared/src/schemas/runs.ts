@@ -61,6 +61,13 @@ export const runSummarySchema = z.object({
   progress: z.object({ done: z.number(), total: z.number() }),
   error: z.string().nullable(),
   attempts: z.number(),
+  /** Attempts a run may take (the first plus the retries). */
+  maxAttempts: z.number(),
+  /** How often the run's worker stopped responding (no heartbeat) and the run was re-queued or failed. */
+  interruptions: z.number(),
+  lastInterruptedAt: z.string().nullable(),
+  /** Seconds since the executing worker's last heartbeat, while running; null otherwise. */
+  silentForS: z.number().nullable(),
   createdBy: z.string(),
   createdAt: z.string(),
   startedAt: z.string().nullable(),

@@ -20,6 +20,8 @@ export const harbour = {
 export interface Harness {
   app: Express;
   mailSinkPort: number;
+  /** The credentials the sink takes mail with (only the app holds them). */
+  mailSinkAuth: { user: string; pass: string };
   /** Signs in through the API and returns the bearer token. */
   token(email: string, password?: string): Promise<string>;
   /** Messages the sink stored for an address, newest first. */
@@ -37,9 +39,10 @@ export function useHarness(): Harness {
     const { startMailSink } = await import('../../../backend/src/mail/mail-sink');
     const { useMailSink } = await import('../../../backend/src/mail/mailer');
     const sink = await startMailSink(0);
-    useMailSink(sink.port);
+    useMailSink(sink.port, sink.auth);
     state.closeSink = sink.close;
     state.mailSinkPort = sink.port;
+    state.mailSinkAuth = sink.auth;
     state.app = createApp({ staticDir: null });
     // Background mail (password-reset links) goes out through the pg-boss mail queue.
     const { startMailWorker } = await import('../../../backend/src/mail/mail-queue');
@@ -55,6 +58,9 @@ export function useHarness(): Harness {
   return {
     get app() {
       return state.app!;
+    },
+    get mailSinkAuth() {
+      return state.mailSinkAuth!;
     },
     get mailSinkPort() {
       return state.mailSinkPort!;

@@ -1,10 +1,12 @@
 import type { RunDetail } from '@shared/schemas/runs';
+import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { FormMessage } from '@/components/ui/field';
 import { Spinner } from '@/components/ui/spinner';
 import { errorMessage } from '@/lib/api-client';
 import { formatNumber } from '@/lib/format';
 import { useCancelRun } from '../api/cancel-run';
+import { runHealthNote } from '../lib/run-health';
 
 /** A queued or running run: steps done (sets solved, candidates simulated, sweep points) out of the total, and a way to stop it. */
 export function RunProgress({ run, canCancel }: { run: RunDetail; canCancel: boolean }) {
@@ -12,6 +14,7 @@ export function RunProgress({ run, canCancel }: { run: RunDetail; canCancel: boo
   const { done, total } = run.progress;
   const fraction = total > 0 ? Math.min(1, done / total) : 0;
   const queued = run.status === 'queued';
+  const health = runHealthNote(run);
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-center justify-between gap-3">
@@ -43,6 +46,11 @@ export function RunProgress({ run, canCancel }: { run: RunDetail; canCancel: boo
             : 'Counting the sets of actives…'}
         </p>
       </div>
+      {health && (
+        <Alert tone={health.tone} title={health.tone === 'caution' ? 'Its worker has gone quiet' : 'Picked up again'}>
+          {health.text}
+        </Alert>
+      )}
       {cancel.isError && <FormMessage>{errorMessage(cancel.error)}</FormMessage>}
     </div>
   );

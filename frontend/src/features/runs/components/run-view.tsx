@@ -10,6 +10,7 @@ import { formatCount, formatDateTime, formatDuration, formatMoney, formatNumber 
 import { CandidatesTable, MAX_SELECTED, rankedOrder } from './candidates-table';
 import { InfeasibleSets } from './infeasible-sets';
 import { RunProgress } from './run-progress';
+import { failureAdvice } from '../lib/run-health';
 import { TradeOffView } from './trade-off-view';
 
 /**
@@ -75,7 +76,7 @@ export function RunView({
       )}
       {run.status === 'failed' && (
         <Alert tone="danger" title="This run failed">
-          {run.error ?? 'The optimiser stopped without saying why.'} Check the brief and run it again.
+          {run.error ?? 'The optimiser stopped without saying why.'} {failureAdvice(run)}
         </Alert>
       )}
       {run.status === 'cancelled' && (
