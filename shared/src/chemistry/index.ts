@@ -44,3 +44,14 @@ export type { FreezingPointResult, InfiniteDilutionResult, IntegralEnthalpyResul
 export { solutionHeatCapacity, soluteApparentHeatCapacity_J_per_gK, waterHeatCapacity_J_per_gK } from './solution-heat-capacity';
 export type { SoluteFraction, SolutionHeatCapacityResult } from './solution-heat-capacity';
 export { linear, pchip } from './interpolate';
+export {
+  DAVIES_A,
+  DAVIES_MAX_IONIC_STRENGTH,
+  PRECIPITATION_SOURCE,
+  SPARINGLY_SOLUBLE_LOG_KSP,
+  findPrecipitates,
+  ionsFromSolutes,
+  log10Ksp,
+  sparinglySolubleSolids,
+} from './precipitation';
+export type { Precipitate, PrecipitationResult, SparinglySolubleSolid } from './precipitation';

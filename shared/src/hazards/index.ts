@@ -6,3 +6,4 @@ export * from './hazard-notes';
 export * from './evaluate-candidate-hazards';
 export { HAZARD_STANDING_CAUTION } from '../schemas/hazards';
 export * from './optimiser-hazards';
+export * from './incompatibilities';
