@@ -15,6 +15,7 @@ import {
 } from './constants';
 import { ThermalModelError } from './errors';
 import { ingredientProcessSchema, type IngredientProcess, type IngredientProcessInput, type ProcessKind } from './process';
+import { setUpReactions, type ReactionModel } from './reaction-partners';
 import { brentRoot } from './root';
 
 /**
@@ -58,22 +59,6 @@ interface SoluteModel {
   /** Anchoring coefficient of the colligative estimate, kg/mol (0 = ideal). */
   colligativeB: number;
   portFreezing: boolean;
-}
-
-interface ReactionModel {
-  label: string;
-  maxExtentMol: number;
-  /** Net mol of liquid water consumed per mol of reaction (negative: produced). */
-  waterPerExtent: number;
-  dH_kJ_per_mol: number;
-  countedReactantMassPerExtentG: number;
-  countedReactantCpPerExtent: number;
-  productMassPerExtentG: number;
-  productCpPerExtent: number;
-  gasMassPerExtentG: number;
-  gasMolPerExtent: number;
-  externalReactantMassPerExtentG: number;
-  kPerS: number;
 }
 
 interface CrystalModel {
@@ -142,11 +127,6 @@ export interface MassInventory {
   lostAsGasG: number;
 }
 
-function phaseOf(key: string): string | null {
-  const m = /\((cr|l|g|aq|ai|ao)\)$/.exec(key);
-  return m ? m[1]! : null;
-}
-
 /** Collects warnings once per code and subject, so a long integration does not repeat them. */
 export class WarningCollector {
   private readonly seen = new Map<string, ComputationWarning>();
@@ -174,6 +154,11 @@ export interface PackModelOptions {
    * heat-capacity data is propagated (lab-logs/monte-carlo.ts). H(T, x) stays a state function.
    */
   heatCapacityFactor?: number;
+  /**
+   * Where a reaction's partners come from (reaction-partners.ts): `from-pack` (default), or
+   * `assumed` in excess when no component brings them (one ingredient's per-gram coefficients).
+   */
+  reactionPartners?: 'from-pack' | 'assumed';
 }
 
 export class PackModel {
@@ -204,7 +189,7 @@ export class PackModel {
     }
     let water = 0;
     let total = 0;
-    components.forEach((component, i) => {
+    const parsedComponents = components.map((component, i) => {
       const field = `components.${i}`;
       if (!(Number.isFinite(component.massG) && component.massG >= 0)) {
         throw new ThermalModelError(`expected massG ≥ 0 g, found ${component.massG}`, { field: `${field}.massG` });
@@ -217,14 +202,18 @@ export class PackModel {
           { field: `${field}.process${issue && issue.path.length ? '.' + issue.path.join('.') : ''}` },
         );
       }
-      const label = component.key ?? component.formula ?? `component ${i + 1}`;
       total += component.massG;
-      const process = parsed.data;
-      if (process.kind === 'inert' && process.role === 'water') {
-        water += component.massG;
-        return;
-      }
-      this.addProcess(process, component.massG, label, options, field);
+      if (parsed.data.kind === 'inert' && parsed.data.role === 'water') water += component.massG;
+      return { label: component.key ?? component.formula ?? `component ${i + 1}`, massG: component.massG, process: parsed.data, field };
+    });
+    // Reactions first: they take their partners from the pack's components (reaction-partners.ts).
+    const reactionSetup = setUpReactions(this.port, parsedComponents, water, options.reactionPartners ?? 'from-pack');
+    for (const w of reactionSetup.warnings) this.warnings.add(w.warning, w.subject);
+    this.reactions.push(...reactionSetup.reactions);
+    this.inerts.push(...reactionSetup.leftovers);
+    parsedComponents.forEach((c, i) => {
+      if (c.process.kind === 'reaction' || (c.process.kind === 'inert' && c.process.role === 'water')) return;
+      this.addProcess(c.process, reactionSetup.massLeftG[i]!, c.label, options, c.field);
     });
     this.waterBaseG = water;
     this.totalMassG = total;
@@ -335,107 +324,9 @@ export class PackModel {
         });
         return;
       }
-      case 'reaction': {
-        const termMass = (key: string) => port.molarMass_g_per_mol(key);
-        const ing = process.reactants.find((t) => t.key === process.ingredientKey);
-        if (!ing) {
-          throw new ThermalModelError(
-            `expected ingredientKey ${process.ingredientKey} among the reactants, found ${process.reactants.map((t) => t.key).join(', ')}`,
-            { field: `${field}.process.ingredientKey` },
-          );
-        }
-        const isWater = (key: string) => key === 'H2O(l)';
-        let counted = 0;
-        let countedCp = 0;
-        let external = 0;
-        let waterPerExtent = 0;
-        const cpOf = (key: string, coef: number) => {
-          const cp = port.heatCapacity_J_per_mol_K(key);
-          if (cp === null) {
-            this.warnings.add(
-              { code: 'thermal.solid-cp-assumed', message: `no Cp° for ${key}; ${FALLBACK_SOLID_CP_J_PER_GK} J/(g·K) assumed` },
-              key,
-            );
-            return coef * termMass(key) * FALLBACK_SOLID_CP_J_PER_GK;
-          }
-          return coef * cp;
-        };
-        for (const t of process.reactants) {
-          if (isWater(t.key)) {
-            waterPerExtent += t.coef;
-            continue;
-          }
-          const m = t.coef * termMass(t.key);
-          if (t.key === process.ingredientKey || process.basis === 'premix') {
-            counted += m;
-            countedCp += cpOf(t.key, t.coef);
-          } else external += m;
-        }
-        let productMass = 0;
-        let productCp = 0;
-        let gasMass = 0;
-        let gasMol = 0;
-        for (const t of process.products) {
-          if (isWater(t.key)) {
-            waterPerExtent -= t.coef;
-            continue;
-          }
-          const m = t.coef * termMass(t.key);
-          if (phaseOf(t.key) === 'g') {
-            gasMass += m;
-            gasMol += t.coef;
-          } else {
-            productMass += m;
-            productCp += cpOf(t.key, t.coef);
-          }
-        }
-        let dH = process.dH_kJ_per_mol;
-        if (dH === undefined) {
-          let sum = 0;
-          const missing: string[] = [];
-          for (const [terms, sign] of [
-            [process.products, 1],
-            [process.reactants, -1],
-          ] as const) {
-            for (const t of terms) {
-              const h = port.formationEnthalpy_kJ_per_mol(t.key);
-              if (h === null) missing.push(t.key);
-              else sum += sign * t.coef * h;
-            }
-          }
-          if (missing.length) {
-            throw new ThermalModelError(
-              `expected ΔfH° of every species of the reaction (or dH_kJ_per_mol), found none for ${missing.join(', ')}`,
-              { field: `${field}.process` },
-            );
-          }
-          dH = sum;
-        }
-        if (external > 0) {
-          this.warnings.add(
-            {
-              code: 'thermal.reaction-partners-external',
-              message: `${label}: reactants other than ${process.ingredientKey} and water are assumed present in excess in other components; their consumption is counted as drawn from outside`,
-            },
-            label,
-          );
-        }
-        this.reactions.push({
-          label,
-          maxExtentMol: counted > 0 ? massG / counted : 0,
-          waterPerExtent,
-          dH_kJ_per_mol: dH,
-          countedReactantMassPerExtentG: counted,
-          countedReactantCpPerExtent: countedCp,
-          productMassPerExtentG: productMass,
-          productCpPerExtent: productCp,
-          gasMassPerExtentG: gasMass,
-          gasMolPerExtent: gasMol,
-          externalReactantMassPerExtentG: external,
-          kPerS: process.rateConstantPerMin / 60,
-        });
+      case 'reaction':
+        // Set up with their partners before the other processes (setUpReactions).
         return;
-      }
       case 'crystallisation': {
         const latentRef =
           process.latentHeat_J_per_g - (process.liquidCp_J_per_gK - process.solidCp_J_per_gK) * (process.meltingPointC - REFERENCE_TEMP_C);
