@@ -3,6 +3,7 @@ import {
   enthalpyOfSolutionInfinite,
   eutectic as findEutecticPoint,
   findHeatCapacityCoefficients,
+  findSolubilitySeries,
   findSpecies,
   freezingPoint,
   integralEnthalpyOfSolution,
@@ -90,6 +91,8 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
 
   interface SolubilityCurve {
     f: (t: number) => number;
+    /** Warning for a temperature outside the tabulated range (the curve extrapolates there). */
+    outside: { tMinC: number; tMaxC: number; warnings: ComputationWarning[] };
   }
   const solubilityCache = new Map<string, SolubilityCurve>();
   const solubilityCurve = (key: string): SolubilityCurve => {
@@ -101,7 +104,16 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
         xs.push(t);
         ys.push(solubility(lib, key, t).gPer100gWater);
       }
-      c = { f: pchip(xs, ys) };
+      const ts = findSolubilitySeries(lib, key).points.map((p) => p.tempC);
+      const tMinC = Math.min(...ts);
+      const tMaxC = Math.max(...ts);
+      const warnings: ComputationWarning[] = [
+        {
+          code: 'outside-solubility-data',
+          message: `The solubility data for ${key} cover ${tMinC}–${tMaxC} °C; outside them the solubility is extrapolated from the end of the table and may be far off (a salt that comes out as a hydrate, e.g. Na2SO4·10H2O below 32 °C, follows another curve). Treat how much dissolves there as an estimate.`,
+        },
+      ];
+      c = { f: pchip(xs, ys), outside: { tMinC, tMaxC, warnings } };
       solubilityCache.set(key, c);
     }
     return c;
@@ -179,7 +191,12 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
         : enthalpyOfSolutionInfinite(lib, key).dH_kJ_per_mol;
     },
     solubility_g_per_100g(key, tempC): PortValue {
-      if (tempC >= 0 && tempC <= 100) return { value: solubilityCurve(key).f(tempC), warnings: NO_WARNINGS };
+      if (tempC >= 0 && tempC <= 100) {
+        const c = solubilityCurve(key);
+        // The sampled curve carries the chemistry layer's extrapolation; say so outside the table.
+        const outside = tempC < c.outside.tMinC - 1e-9 || tempC > c.outside.tMaxC + 1e-9;
+        return { value: c.f(tempC), warnings: outside ? c.outside.warnings : NO_WARNINGS };
+      }
       const r = solubility(lib, key, tempC);
       return { value: r.gPer100gWater, warnings: r.warnings };
     },

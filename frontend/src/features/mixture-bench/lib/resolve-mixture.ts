@@ -1,7 +1,7 @@
 import { FormulaError, UnknownSpeciesError, type ChemistryLibrary } from '@shared/chemistry';
 import type { Ingredient } from '@shared/schemas/library';
 import type { EvaluateMixtureRequest, ResolvedMixture } from '@shared/schemas/mixtures';
-import { processForFormula, type IngredientProcessInput } from '@shared/thermal';
+import { mixtureInputProblems, processForFormula, type IngredientProcessInput } from '@shared/thermal';
 
 export type ResolveResult =
   | { ok: true; mixture: ResolvedMixture }
@@ -28,13 +28,16 @@ export function resolveMixture(lib: ChemistryLibrary, ingredients: ReadonlyMap<n
     }
     const formula = c.formula ?? '';
     try {
-      components.push({ formula, massG: c.massG, process: processForFormula(lib, formula) });
+      components.push({ formula, massG: c.massG, process: processForFormula(lib, formula, c.process) });
     } catch (error) {
       if (error instanceof UnknownSpeciesError || error instanceof FormulaError) fields.push({ field: `components.${k}.formula`, message: error.message });
       else throw error;
     }
   });
   if (fields.length) return { ok: false, fields };
+  // The same checks the server answers with a 400 (thermal/mixture-input-checks.ts).
+  const problems = mixtureInputProblems(components, (k) => (request.components[k]!.ingredientId !== undefined ? 'ingredientId' : 'formula'));
+  if (problems.length) return { ok: false, fields: problems };
   const { components: _ignored, ...conditions } = request;
   return { ok: true, mixture: { ...conditions, components } };
 }
