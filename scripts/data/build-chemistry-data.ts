@@ -213,6 +213,9 @@ const SPECIES: SpeciesSpec[] = [
   { nbs: 'BaCl2', state: 'cr', name: 'barium chloride' },
   { nbs: 'BaCl2', state: 'ai', name: 'barium chloride (aqueous, ionised)' },
   { nbs: 'BaCl2·2H2O', state: 'cr', name: 'barium chloride dihydrate' },
+  // Sparingly soluble salts that precipitate when ions of two ingredients meet
+  { nbs: 'BaSO4', state: 'cr', name: 'barium sulfate (barite)' },
+  { nbs: 'BaCO3', state: 'cr', name: 'barium carbonate (witherite)' },
   // Aqueous ions
   ION('H^+', 'hydrogen ion', 'H+'),
   ION('OH^-', 'hydroxide ion', 'OH-'),

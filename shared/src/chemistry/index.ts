@@ -55,3 +55,14 @@ export {
   stoichiometricCharge,
 } from './pack-reaction';
 export type { PackChargeInput, PackChargeResult, PackTerm } from './pack-reaction';
+export {
+  DAVIES_A,
+  DAVIES_MAX_IONIC_STRENGTH,
+  PRECIPITATION_SOURCE,
+  SPARINGLY_SOLUBLE_LOG_KSP,
+  findPrecipitates,
+  ionsFromSolutes,
+  log10Ksp,
+  sparinglySolubleSolids,
+} from './precipitation';
+export type { Precipitate, PrecipitationResult, SparinglySolubleSolid } from './precipitation';

@@ -204,11 +204,12 @@ export const DEMO_INGREDIENTS: readonly DemoIngredient[] = [
     process: {
       kind: 'reaction',
       reactants: [{ key: 'Ba(OH)2·8H2O(cr)', coef: 1 }, { key: 'NH4Cl(cr)', coef: 2 }],
-      products: [{ key: 'BaCl2·2H2O(cr)', coef: 1 }, { key: 'NH3(g)', coef: 2 }, { key: 'H2O(l)', coef: 8 }],
+      // The ammonia dissolves in the eight waters the reaction frees (as the chemistry reference check writes it).
+      products: [{ key: 'BaCl2·2H2O(cr)', coef: 1 }, { key: 'NH3(aq)', coef: 2 }, { key: 'H2O(l)', coef: 8 }],
       ingredientKey: 'Ba(OH)2·8H2O(cr)',
     },
     costPerKg: '9.50', densityGPerMl: 2.18, speciesKey: 'Ba(OH)2·8H2O(cr)', sources: [NBS, CRC_DENSITY],
-    notes: 'Solid–solid endothermic reaction with ammonium chloride; releases ammonia. Barium compounds are harmful if swallowed and corrosive (GHS H302, H332, H314): a demonstration chemistry, not for consumer packs.',
+    notes: 'Solid–solid endothermic reaction with ammonium chloride (2 mol per mol); the ammonia dissolves in the water the reaction frees and smells strongly. Barium compounds are harmful if swallowed and corrosive (GHS H302, H332, H314): a demonstration chemistry, not for consumer packs.',
   },
   {
     key: 'sodium-acetate-supercooled', name: 'Sodium acetate trihydrate', grade: 'Crystallising grade, nucleation-clean', role: 'active',

@@ -3,6 +3,7 @@ import { UnknownSpeciesError } from '../chemistry/library';
 import type { ChemistryLibrary } from '../chemistry/types';
 import type { EvaluateMixtureRequest, ResolvedMixture } from '../schemas/mixtures';
 import { processForFormula } from '../thermal/formula-process';
+import { mixtureInputProblems } from '../thermal/mixture-input-checks';
 import type { IngredientProcessInput } from '../thermal/process';
 import { processOfLine, type LineRole } from './components';
 
@@ -53,7 +54,8 @@ export function resolveMixtureRequest<I extends BenchIngredient>(
     }
     const formula = c.formula ?? '';
     try {
-      const process = processForFormula(lib, formula);
+      // The process the bench chose or confirmed for a bare formula, else the one it is expected to have.
+      const process = processForFormula(lib, formula, c.process);
       components.push({ formula, massG: c.massG, process });
       resolved.push({ ingredient: null, formula, massG: c.massG, process });
     } catch (error) {
@@ -62,6 +64,9 @@ export function resolveMixtureRequest<I extends BenchIngredient>(
     }
   });
   if (fields.length) return { ok: false, fields };
+  // Mixtures that would pass silently: every mass 0, a salt with no water (thermal/mixture-input-checks.ts).
+  const problems = mixtureInputProblems(components, (k) => (request.components[k]!.ingredientId !== undefined ? 'ingredientId' : 'formula'));
+  if (problems.length) return { ok: false, fields: problems };
   const { components: _ignored, ...conditions } = request;
   return { ok: true, mixture: { ...conditions, components }, resolved };
 }

@@ -7,3 +7,5 @@ export * from './hazard-notes';
 export * from './evaluate-candidate-hazards';
 export { HAZARD_STANDING_CAUTION } from '../schemas/hazards';
 export * from './optimiser-hazards';
+export * from './incompatibilities';
+export * from './formula-hazard-data';

@@ -160,7 +160,9 @@ export function parseIngredient(port: ChemistryPort, ingredient: OptimiserIngred
     role: ingredient.role === 'solvent' ? ('water' as const) : ingredient.role === 'packaging' ? ('packaging' as const) : ('additive' as const),
     ...(ingredient.cpJPerGK ? { cp_J_per_gK: ingredient.cpJPerGK } : {}),
   };
-  const model = new PackModel(port, [{ key: ingredient.id, massG: 1, process }], { packAreaM2 });
+  // Per gram of this ingredient alone: a reaction's partners are other ingredients with their own
+  // coefficients (the ingredient's `needs` bring them), so here they are taken as present.
+  const model = new PackModel(port, [{ key: ingredient.id, massG: 1, process }], { packAreaM2, reactionPartners: 'assumed' });
   const cost = Number(ingredient.costPerKg);
   if (!(Number.isFinite(cost) && cost >= 0)) {
     throw new RangeError(`ingredient ${ingredient.id}: expected costPerKg ≥ 0 as a decimal, found ${String(ingredient.costPerKg)}`);

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { contactSchema } from '../thermal/contact';
+import { FORMULA_PROCESS_KINDS } from '../thermal/formula-process';
 import { ingredientProcessSchema } from '../thermal/process';
 import { loadSchema } from './briefs';
 import { idSchema, textSchema } from './common';
@@ -39,10 +40,16 @@ export const mixtureComponentRequestSchema = z
     ingredientId: idSchema.optional(),
     formula: textSchema().trim().min(1).optional(),
     massG: z.number().min(0, 'massG must be 0 or more').max(1e5),
+    /** For a bare formula: the process the bench chose or confirmed (thermal/formula-process.ts); default the expected one. */
+    process: z.enum(FORMULA_PROCESS_KINDS, { error: `process must be one of ${FORMULA_PROCESS_KINDS.join(', ')}` }).optional(),
   })
   .refine((c) => (c.ingredientId === undefined) !== (c.formula === undefined), {
     message: 'give either ingredientId or formula (exactly one)',
     path: ['ingredientId'],
+  })
+  .refine((c) => c.process === undefined || c.formula !== undefined, {
+    message: 'process is chosen only for a bare formula; a library ingredient carries its own',
+    path: ['process'],
   });
 
 export const evaluateMixtureRequestSchema = z

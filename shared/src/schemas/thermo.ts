@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { textSchema } from './common';
 import { phaseSchema } from './library';
 import { evaluateMixtureResponseSchema } from './mixtures';
+import { ghsClassificationSchema, hazardNoteSchema, labelElementsSchema } from './hazards';
 
 // Thermochemistry API: reaction thermodynamics and the chemistry library for instant previews.
 
@@ -81,13 +82,28 @@ export const evaluatedComponentSchema = z.object({
   name: z.string(),
   massG: z.number(),
   processKind: z.string(),
+  /** For a bare formula: the processes the bench may choose, the expected one first (empty for water and ingredients). */
+  processOptions: z.array(z.object({ kind: z.string(), label: z.string() })).default([]),
 });
 
 export const evaluateMixtureApiResponseSchema = evaluateMixtureResponseSchema.extend({
   /** null when the components' costs are in different currencies (see warnings). */
   cost: mixtureCostSchema.nullable(),
   components: z.array(evaluatedComponentSchema),
-  /** Hazard notes of the mixture (filled by the hazard-notes rules; empty until they run here). */
-  hazards: z.array(z.object({ severity: z.string(), text: z.string(), ruleId: z.string(), source: z.string() })),
+  /** Hazard notes of the mixture (shared/src/hazards, as for a candidate), most serious first. */
+  hazards: z.array(hazardNoteSchema),
+  /** GHS label elements of the mixture and its classification. */
+  label: labelElementsSchema,
+  classification: z.array(ghsClassificationSchema.extend({ rule: z.string() })),
+  /** Where each bare formula's classification comes from, or that the project's data hold none. */
+  classificationStatements: z.array(z.string()),
+  standingCaution: z.string(),
+  /** What precipitates when the dissolved ions meet (chemistry/precipitation.ts). */
+  precipitation: z.object({
+    precipitates: z.array(z.object({ solidKey: z.string(), name: z.string(), mol: z.number(), massG: z.number(), log10Ksp: z.number(), heatReleasedJ: z.number().nullable() })),
+    heatReleasedJ: z.number(),
+    statement: z.string(),
+    source: z.string(),
+  }),
 });
 export type EvaluateMixtureApiResponse = z.infer<typeof evaluateMixtureApiResponseSchema>;

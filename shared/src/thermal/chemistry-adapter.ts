@@ -160,6 +160,9 @@ export function chemistryPort(lib: ChemistryLibrary = defaultChemistryLibrary())
     formationEnthalpy_kJ_per_mol(key) {
       return species(key)?.dfH_kJ_per_mol ?? null;
     },
+    formationGibbs_kJ_per_mol(key) {
+      return species(key)?.dfG_kJ_per_mol ?? null;
+    },
     heatCapacity_J_per_mol_K(key) {
       return species(key)?.Cp_J_per_mol_K ?? null;
     },

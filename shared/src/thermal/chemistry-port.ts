@@ -27,6 +27,8 @@ export interface ChemistryPort {
   molarMass_g_per_mol(formulaOrKey: string): number;
   /** ΔfH° of a species, kJ/mol, or null when the species data hold none. */
   formationEnthalpy_kJ_per_mol(speciesKey: string): number | null;
+  /** ΔfG° of a species, kJ/mol, or null when the species data hold none (optional: gas–liquid partition of reaction products). */
+  formationGibbs_kJ_per_mol?(speciesKey: string): number | null;
   /** Cp° of a species, J/(mol·K), or null when the species data hold none. */
   heatCapacity_J_per_mol_K(speciesKey: string): number | null;
   /**

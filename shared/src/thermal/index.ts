@@ -32,4 +32,7 @@ export type { TimeProfileInput, TimeProfileResult, CurvePoint, TargetBand, Solut
 export { integrateDormandPrince } from './rk45';
 export type { OdeOptions, OdeSolution, OdeRhs } from './rk45';
 export { brentRoot } from './root';
-export { processForFormula } from './formula-process';
+export { FORMULA_PROCESS_KINDS, formulaProcessOptions, processForFormula } from './formula-process';
+export type { FormulaProcessKind, FormulaProcessOption } from './formula-process';
+export { mixturePrecipitation } from './mixture-precipitation';
+export { mixtureInputProblems } from './mixture-input-checks';

@@ -9,6 +9,7 @@ import { ReactionProcesses, type ReactionModel } from './processes/reaction';
 import { WaterPhases } from './processes/water-phases';
 import type { ChemistryPort } from './chemistry-port';
 import { REFERENCE_TEMP_C } from './constants';
+import { setUpReactions } from './reaction-partners';
 
 export { WarningCollector } from './processes/common';
 export type { HeatCapacityParts, MassInventory, ProcessRef } from './processes/common';
@@ -53,6 +54,11 @@ export interface PackModelOptions {
    * heat-capacity data is propagated (lab-logs/monte-carlo.ts). H(T, x) stays a state function.
    */
   heatCapacityFactor?: number;
+  /**
+   * Where a reaction's partners come from (reaction-partners.ts): `from-pack` (default), or
+   * `assumed` in excess when no component brings them (one ingredient's per-gram coefficients).
+   */
+  reactionPartners?: 'from-pack' | 'assumed';
 }
 
 /**
@@ -95,7 +101,7 @@ export class PackModel {
     this.water = new WaterPhases(this.dissolution);
     let water = 0;
     let total = 0;
-    components.forEach((component, i) => {
+    const parsedComponents = components.map((component, i) => {
       const field = `components.${i}`;
       if (!(Number.isFinite(component.massG) && component.massG >= 0)) {
         throw new ThermalModelError(`expected massG ≥ 0 g, found ${component.massG}`, { field: `${field}.massG` });
@@ -108,14 +114,18 @@ export class PackModel {
           { field: `${field}.process${issue && issue.path.length ? '.' + issue.path.join('.') : ''}` },
         );
       }
-      const label = component.key ?? component.formula ?? `component ${i + 1}`;
       total += component.massG;
-      const process = parsed.data;
-      if (process.kind === 'inert' && process.role === 'water') {
-        water += component.massG;
-        return;
-      }
-      this.addProcess(process, component.massG, label, options, field);
+      if (parsed.data.kind === 'inert' && parsed.data.role === 'water') water += component.massG;
+      return { label: component.key ?? component.formula ?? `component ${i + 1}`, massG: component.massG, process: parsed.data, field };
+    });
+    // Reactions first: they take their partners from the pack's components (reaction-partners.ts).
+    const reactionSetup = setUpReactions(port, parsedComponents, water, options.reactionPartners ?? 'from-pack');
+    for (const w of reactionSetup.warnings) this.warnings.add(w.warning, w.subject);
+    this.reaction.reactions.push(...reactionSetup.reactions);
+    for (const l of reactionSetup.leftovers) this.inert.add({ kind: 'inert', role: 'additive', cp_J_per_gK: l.cpJPerGK }, l.massG, l.label);
+    parsedComponents.forEach((c, i) => {
+      if (c.process.kind === 'reaction' || (c.process.kind === 'inert' && c.process.role === 'water')) return;
+      this.addProcess(c.process, reactionSetup.massLeftG[i]!, c.label, options, c.field);
     });
     this.dissolution.finish();
     this.hydrateMelt.finish();
@@ -160,7 +170,7 @@ export class PackModel {
         else this.dissolution.add(process, massG, label, field);
         return;
       case 'reaction':
-        this.reaction.add(process, massG, label, field);
+        // Set up with their partners before the other processes (setUpReactions).
         return;
       case 'crystallisation':
         this.melt.add(process, massG, label);

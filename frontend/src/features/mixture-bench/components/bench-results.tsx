@@ -1,3 +1,4 @@
+import type { PrecipitationResult } from '@shared/chemistry';
 import type { EvaluateMixtureResponse } from '@shared/schemas/mixtures';
 import { LineChart, type ChartBand, type ChartRule, type ChartSeries } from '@/components/charts/line-chart';
 import { Alert } from '@/components/ui/alert';
@@ -28,10 +29,12 @@ const kJ = (joules: number) => formatQuantity(joules / 1000, 'kJ', 2);
 
 export function BenchResults({
   result,
+  precipitation,
   band,
   ambientC,
 }: {
   result: EvaluateMixtureResponse;
+  precipitation?: PrecipitationResult;
   band: { minC: number; maxC: number } | null;
   ambientC: number | null;
 }) {
@@ -108,6 +111,11 @@ export function BenchResults({
             ))}
           </tbody>
         </table>
+      )}
+      {precipitation && precipitation.precipitates.length > 0 && (
+        <Alert tone="caution" title="A solid precipitates">
+          {precipitation.statement} The curve above does not include this solid or its heat yet; the salts do not stay dissolved as designed.
+        </Alert>
       )}
       {result.iceG > 0.01 && <Alert tone="caution">About {formatQuantity(result.iceG, 'g')} of ice forms: the pack sits on its freezing line.</Alert>}
 

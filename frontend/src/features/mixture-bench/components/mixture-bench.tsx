@@ -2,6 +2,7 @@ import { useMemo } from 'react';
 import { useFieldArray, useForm, useWatch, type UseFormRegister } from 'react-hook-form';
 import type { ChemistryLibrary } from '@shared/chemistry';
 import type { LoadKind } from '@shared/schemas/briefs';
+import { formulaProcessOptions, type FormulaProcessOption } from '@shared/thermal';
 import type { Ingredient } from '@shared/schemas/library';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
@@ -16,6 +17,7 @@ import { useEvaluateMixtureOnServer } from '../api/evaluate-mixture-on-server';
 import { BLANK_COMPONENT, DEFAULT_BENCH, benchRequest, type BenchValues } from '../lib/bench-values';
 import { useLiveEvaluation } from '../lib/use-live-evaluation';
 import { BenchResults } from './bench-results';
+import { ServerChecks } from './server-checks';
 
 /** The loads a pack may serve, as the bench names them. */
 const LOAD_KINDS: Record<LoadKind, string> = {
@@ -108,15 +110,18 @@ export function MixtureBench({ library, ingredients }: { library: ChemistryLibra
                         ))}
                       </SelectField>
                     ) : (
-                      <TextField
-                        label={`Component ${k + 1}: formula`}
-                        hideLabel
-                        placeholder="NH4NO3, H2O, CaCl2·6H2O"
-                        autoComplete="off"
-                        spellCheck={false}
-                        error={errorOf(`components.${k}.formula`)}
-                        {...form.register(`components.${k}.formula`)}
-                      />
+                      <div className="flex flex-col gap-1">
+                        <TextField
+                          label={`Component ${k + 1}: formula`}
+                          hideLabel
+                          placeholder="NH4NO3, H2O, CaCl2·6H2O"
+                          autoComplete="off"
+                          spellCheck={false}
+                          error={errorOf(`components.${k}.formula`)}
+                          {...form.register(`components.${k}.formula`)}
+                        />
+                        <FormulaProcessChoice library={library} formula={values.components[k]?.formula ?? ''} index={k} register={form.register} />
+                      </div>
                     )}
                     <TextField
                       label={`Component ${k + 1}: mass (g)`}
@@ -227,13 +232,15 @@ export function MixtureBench({ library, ingredients }: { library: ChemistryLibra
           <div aria-live="polite" className="flex flex-col gap-4">
             {server.isError && <Alert tone="danger" title="The server could not check this mixture">{errorMessage(server.error)}</Alert>}
             {server.isSuccess && (
-              <Alert tone="info" title="Checked on the server" action={<Button size="sm" variant="ghost" onClick={() => server.reset()}>Dismiss</Button>}>
-                End {formatQuantity(server.data.endTempC, '°C', 2)}
-                {live.state === 'done' ? ` (browser: ${formatQuantity(live.result.endTempC, '°C', 2)})` : ''} · dissolved{' '}
-                {formatNumber(server.data.dissolvedFraction * 100, { maxFractionDigits: 1 })}&#8239;%
-                {server.data.cost ? ` · material cost ${formatMoney(server.data.cost.amount, server.data.cost.currency)}${server.data.cost.complete ? '' : ' (library ingredients only)'}` : ''}
-                {server.data.hazards.length > 0 ? ` · ${server.data.hazards.length} hazard notes` : ''}
-              </Alert>
+              <>
+                <Alert tone="info" title="Checked on the server" action={<Button size="sm" variant="ghost" onClick={() => server.reset()}>Dismiss</Button>}>
+                  End {formatQuantity(server.data.endTempC, '°C', 2)}
+                  {live.state === 'done' ? ` (browser: ${formatQuantity(live.result.endTempC, '°C', 2)})` : ''} · dissolved{' '}
+                  {formatNumber(server.data.dissolvedFraction * 100, { maxFractionDigits: 1 })}&#8239;%
+                  {server.data.cost ? ` · material cost ${formatMoney(server.data.cost.amount, server.data.cost.currency)}${server.data.cost.complete ? '' : ' (library ingredients only)'}` : ''}
+                </Alert>
+                <ServerChecks result={server.data} />
+              </>
             )}
             {!hasAnyComponent ? (
               <EmptyState title="Add components to see the curve">
@@ -244,7 +251,7 @@ export function MixtureBench({ library, ingredients }: { library: ChemistryLibra
             ) : !request ? (
               <Alert tone="caution" title="Complete the mixture">Fix the fields marked beside them; the evaluation follows at once.</Alert>
             ) : live.state === 'done' ? (
-              <BenchResults result={live.result} band={band} ambientC={ambientC} />
+              <BenchResults result={live.result} precipitation={live.precipitation} band={band} ambientC={ambientC} />
             ) : (
               <Loading label="Evaluating…" />
             )}
@@ -282,6 +289,31 @@ function NumberField({
   register: UseFormRegister<BenchValues>;
 }) {
   return <TextField label={label} hint={hint} inputMode="decimal" autoComplete="off" error={error} {...register(name)} />;
+}
+
+/**
+ * The process a bare formula gets (thermal/formula-process.ts): shown for the user to confirm, and
+ * a choice where a chemist could mean more than one (sodium acetate trihydrate: dissolve, or a
+ * supercooled melt).
+ */
+function FormulaProcessChoice({ library, formula, index, register }: { library: ChemistryLibrary; formula: string; index: number; register: UseFormRegister<BenchValues> }) {
+  let options: FormulaProcessOption[] = [];
+  try {
+    options = formula.trim() ? formulaProcessOptions(library, formula.trim()) : [];
+  } catch {
+    options = []; // the formula field shows why it is not known
+  }
+  if (options.length === 0) return null;
+  if (options.length === 1) return <p className="text-caption text-ink-500">Process: {options[0]!.label}</p>;
+  return (
+    <SelectField label={`Component ${index + 1}: process`} controlSize="md" {...register(`components.${index}.process`)}>
+      {options.map((o, n) => (
+        <option key={o.kind} value={n === 0 ? '' : o.kind}>
+          {o.label}
+        </option>
+      ))}
+    </SelectField>
+  );
 }
 
 /** The bench with its data: the chemistry library (once) and the ingredient choices. */

@@ -9,6 +9,8 @@ export type BenchComponentValues = {
   source: 'ingredient' | 'formula';
   ingredientId: string;
   formula: string;
+  /** For a formula: the process chosen on the bench ('' = the one a chemist expects). */
+  process: string;
   massG: string;
 };
 
@@ -43,7 +45,7 @@ export const LOAD_FIELDS = {
   uaToEnvWPerK: 'loadUaToEnvWPerK',
 } as const;
 
-export const BLANK_COMPONENT: BenchComponentValues = { source: 'ingredient', ingredientId: '', formula: '', massG: '' };
+export const BLANK_COMPONENT: BenchComponentValues = { source: 'ingredient', ingredientId: '', formula: '', process: '', massG: '' };
 
 export const DEFAULT_BENCH: BenchValues = {
   components: [{ ...BLANK_COMPONENT }, { ...BLANK_COMPONENT }],
@@ -111,7 +113,7 @@ export function benchRequest(values: BenchValues): { request: EvaluateMixtureReq
     return [
       c.source === 'ingredient'
         ? { ingredientId: c.ingredientId === '' ? undefined : Number(c.ingredientId), massG }
-        : { formula: c.formula.trim() === '' ? undefined : c.formula.trim(), massG },
+        : { formula: c.formula.trim() === '' ? undefined : c.formula.trim(), massG, ...(c.process ? { process: c.process } : {}) },
     ];
   });
   const errors: BenchErrors = {};

@@ -5,10 +5,12 @@ import type { EvaluateMixtureRequest, EvaluateMixtureResponse } from '@shared/sc
 import { evaluateMixture } from '@shared/evaluation/evaluate-mixture';
 import { chemistryModelFor } from '@shared/evaluation/chemistry-cache';
 import { ThermalModelError } from '@shared/thermal';
+import type { PrecipitationResult } from '@shared/chemistry';
+import { mixturePrecipitation } from '@shared/thermal';
 import { resolveMixture } from './resolve-mixture';
 
 type Outcome =
-  | { state: 'done'; result: EvaluateMixtureResponse; elapsedMs: number }
+  | { state: 'done'; result: EvaluateMixtureResponse; precipitation: PrecipitationResult; elapsedMs: number }
   | { state: 'failed'; message: string; fields: { field: string; message: string }[] };
 
 export type LiveEvaluation =
@@ -43,7 +45,9 @@ export function useLiveEvaluation(
       const started = performance.now();
       try {
         const result = evaluateMixture(port, resolved.mixture);
-        setLatest({ key, outcome: { state: 'done', result, elapsedMs: performance.now() - started } });
+        // Ions of two ingredients that meet in the water: the same check the server runs.
+        const precipitation = mixturePrecipitation(lib, resolved.mixture.components, result);
+        setLatest({ key, outcome: { state: 'done', result, precipitation, elapsedMs: performance.now() - started } });
       } catch (error) {
         const message = error instanceof Error ? error.message : 'The model could not evaluate this mixture.';
         const field = error instanceof ThermalModelError && error.field ? error.field : '';
