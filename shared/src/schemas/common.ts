@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-/** The four roles of a workspace member (DESIGN.md §1). */
+/** The four roles of a workspace member (DEVELOPERS.md, "Roles"). */
 export const ROLES = ['designer', 'chemist', 'reviewer', 'admin'] as const;
 export const roleSchema = z.enum(ROLES);
 export type Role = z.infer<typeof roleSchema>;
@@ -34,7 +34,7 @@ export const pagingQuerySchema = z.object({
   pageSize: z.coerce.number().int().min(1, 'must be 1 or more').max(200, 'must be at most 200').default(50),
 });
 
-/** One error shape for every API failure (DESIGN.md §5). */
+/** One error shape for every API failure (DEVELOPERS.md, "The API"). */
 export const apiErrorSchema = z.object({
   error: z.object({
     code: z.string(),

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { REVIEW_STAGES, REVIEW_STATES, REVIEW_VERDICTS } from '../reviews/state-machine';
+import { REVIEW_STAGES, REVIEW_STATES, REVIEW_VERDICTS } from './review-states';
 import { candidateHazardsSchema, ingredientHazardDataSchema, labelElementsSchema, hazardNoteSchema } from './hazards';
 import { candidateRecordSchema } from './runs';
 
