@@ -6,9 +6,40 @@ import pluginQuery from '@tanstack/eslint-plugin-query';
 import globals from 'globals';
 import { existsSync, readdirSync } from 'node:fs';
 
-/** Layer boundaries (STYLE.md): shared/ is pure; features do not import each other. */
+/** Layer boundaries (DEVELOPERS.md, "Layout"): shared/ is pure and layered; features do not import each other. */
 const featuresDir = new URL('./frontend/src/features', import.meta.url);
 const featureNames = existsSync(featuresDir) ? readdirSync(featuresDir, { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name) : [];
+
+/**
+ * The layers of shared/src, bottom first (DEVELOPERS.md, "Layers of shared/"): a folder imports
+ * only folders of lower layers, never a peer of its own layer or anything above it.
+ */
+const SHARED_LAYERS = [['chemistry'], ['thermal'], ['schemas'], ['hazards'], ['calibration'], ['evaluation'], ['optimiser', 'lab-logs', 'reviews'], ['demo']];
+const SHARED_PURITY = [
+  { group: ['@/*', '**/frontend/**', '**/backend/**'], message: 'shared/ is pure: it imports nothing from frontend/ or backend/.' },
+  { group: ['node:*', 'fs', 'path', 'http', 'pg', 'sequelize', 'express'], message: 'shared/ does no I/O.' },
+];
+const sharedLayerRules = SHARED_LAYERS.flatMap((layer, k) =>
+  layer.map((folder) => {
+    const above = SHARED_LAYERS.slice(k + 1).flat();
+    const peers = layer.filter((f) => f !== folder);
+    const forbidden = [...peers, ...above];
+    return {
+      files: [`shared/src/${folder}/**/*.ts`],
+      ignores: ['**/*.test.ts', '**/__fixtures__/**'],
+      rules: {
+        'no-restricted-imports': ['error', {
+          patterns: [
+            ...SHARED_PURITY,
+            ...(forbidden.length
+              ? [{ group: forbidden.flatMap((f) => [`../${f}`, `../${f}/**`, `../../${f}`, `../../${f}/**`, `**/shared/src/${f}`, `**/shared/src/${f}/**`, `@shared/${f}`, `@shared/${f}/**`]), message: `shared/src/${folder} sits below ${forbidden.join(', ')} in the layer order ${SHARED_LAYERS.map((l) => l.join(' | ')).join(' → ')}: move the code down or call it from above.` }]
+              : []),
+          ],
+        }],
+      },
+    };
+  }),
+);
 
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', '.data/**', '.test-artifacts/**', 'coverage/**'] },
@@ -25,13 +56,11 @@ export default tseslint.config(
     files: ['shared/**/*.ts'],
     rules: {
       'no-restricted-imports': ['error', {
-        patterns: [
-          { group: ['@/*', '**/frontend/**', '**/backend/**'], message: 'shared/ is pure: it imports nothing from frontend/ or backend/.' },
-          { group: ['node:*', 'fs', 'path', 'http', 'pg', 'sequelize', 'express'], message: 'shared/ does no I/O.' },
-        ],
+        patterns: SHARED_PURITY,
       }],
     },
   },
+  ...sharedLayerRules,
   {
     files: ['frontend/**/*.{ts,tsx}'],
     languageOptions: { globals: { ...globals.browser } },

@@ -17,7 +17,7 @@ import { createRequire } from 'node:module';
 import os from 'node:os';
 import path from 'node:path';
 import { defaultChemistryLibrary } from '../shared/src/chemistry';
-import { DEMO_BRIEFS, DEMO_LIBRARY } from '../shared/src/optimiser/demo-library';
+import { DEMO_BRIEFS, DEMO_LIBRARY } from '../shared/src/demo/demo-library';
 import { briefSchema } from '../shared/src/schemas/briefs';
 import { optimiseOnThread, stopOptimiseThread } from '../backend/src/runs/optimise-pool';
 import { runLibraryScaleBench } from './bench/library-scale';

@@ -9,7 +9,7 @@
  */
 import { pathToFileURL } from 'node:url';
 import { defaultChemistryLibrary } from '../../shared/src/chemistry';
-import { DEMO_BRIEFS, DEMO_LIBRARY } from '../../shared/src/optimiser/demo-library';
+import { DEMO_BRIEFS, DEMO_LIBRARY } from '../../shared/src/demo/demo-library';
 import { runOptimisation } from '../../shared/src/optimiser/run-optimisation';
 import { briefSchema } from '../../shared/src/schemas/briefs';
 import { chemistryModelFor } from '../../shared/src/evaluation/chemistry-cache';

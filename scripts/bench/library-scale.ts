@@ -7,7 +7,7 @@
  * Run: `npx tsx scripts/bench/library-scale.ts`, or call runLibraryScaleBench() (npm run bench).
  */
 import { defaultChemistryLibrary } from '../../shared/src/chemistry';
-import { DEMO_BRIEFS, DEMO_LIBRARY } from '../../shared/src/optimiser/demo-library';
+import { DEMO_BRIEFS, DEMO_LIBRARY } from '../../shared/src/demo/demo-library';
 import { runOptimisation } from '../../shared/src/optimiser/run-optimisation';
 import type { OptimiserIngredient } from '../../shared/src/optimiser/types';
 import { chemistryPort } from '../../shared/src/thermal/chemistry-adapter';

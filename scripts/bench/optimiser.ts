@@ -14,7 +14,7 @@
  * Run: `npx tsx scripts/bench/optimiser.ts`, or call runOptimiserBench() (npm run bench).
  */
 import { defaultChemistryLibrary } from '../../shared/src/chemistry';
-import { DEMO_BRIEFS, DEMO_LIBRARY } from '../../shared/src/optimiser/demo-library';
+import { DEMO_BRIEFS, DEMO_LIBRARY } from '../../shared/src/demo/demo-library';
 import { objectiveValue, rowValue, type LinearModel } from '../../shared/src/optimiser/linear-model';
 import { runOptimisation, type RunOptimisationOutput } from '../../shared/src/optimiser/run-optimisation';
 import { solveLp, toLpProblem, type LpProblem } from '../../shared/src/optimiser/solve-set';

@@ -393,3 +393,21 @@ describe('hazard data on ingredients', () => {
     expect(res.body.statements.find((s: { code: string }) => s.code === 'H272').text).toBe('May intensify fire; oxidizer');
   });
 });
+
+describe('the candidate curve is replayed on the server with the run’s data', () => {
+  it('GET /api/candidates/:id/curve answers the curve the run verified, the band, and 401/404 outside the workspace', async () => {
+    const designer = await h.token(demo.designer);
+    const res = await request(h.app).get(`/api/candidates/${base.id}/curve`).set(bearer(designer));
+    expect(res.status).toBe(200);
+    expect(res.body.error).toBeNull();
+    expect(res.body.curve.length).toBeGreaterThan(10);
+    const candidate = (await request(h.app).get(`/api/candidates/${base.id}`).set(bearer(designer))).body.candidate;
+    // The same evaluation core and the same snapshot as the run's verification: the same figures
+    // within the verification's own time tolerance (0.05 min; the stored masses are rounded).
+    if (candidate.verification.timeToTargetMin !== null) expect(Math.abs(res.body.timeToTargetMin - candidate.verification.timeToTargetMin)).toBeLessThan(0.05);
+    expect(Math.abs(res.body.minutesInBand - candidate.verification.minutesInBand)).toBeLessThan(0.05);
+    expect(res.body.band.maxC).toBeCloseTo(5 + 2, 9);
+    expect((await request(h.app).get(`/api/candidates/${base.id}/curve`)).status).toBe(401);
+    expect((await request(h.app).get(`/api/candidates/${base.id}/curve`).set(bearer(await h.token(harbour.designer)))).status).toBe(404);
+  });
+});

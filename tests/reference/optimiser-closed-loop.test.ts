@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
-import { DEMO_BRIEFS, DEMO_LIBRARY } from '@shared/optimiser/demo-library';
+import { DEMO_BRIEFS, DEMO_LIBRARY } from '@shared/demo/demo-library';
 import { pruneDominated } from '@shared/optimiser/dominance';
 import { runOptimisation } from '@shared/optimiser/run-optimisation';
 import { sweepTarget } from '@shared/optimiser/sweep';

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import type { Highs } from 'highs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
-import { DEMO_BRIEFS, DEMO_LIBRARY } from '@shared/optimiser/demo-library';
+import { DEMO_BRIEFS, DEMO_LIBRARY } from '@shared/demo/demo-library';
 import { rowViolation, type LinearModel } from '@shared/optimiser/linear-model';
 import { runOptimisation, type RunOptimisationOutput } from '@shared/optimiser/run-optimisation';
 import { toLpProblem } from '@shared/optimiser/solve-set';

@@ -1,7 +1,7 @@
 import type { Highs } from 'highs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
-import { DEMO_LIBRARY } from '@shared/optimiser/demo-library';
+import { DEMO_LIBRARY } from '@shared/demo/demo-library';
 import { diagnoseInfeasible } from '@shared/optimiser/diagnose-infeasible';
 import { rowValue } from '@shared/optimiser/linear-model';
 import { runOptimisation } from '@shared/optimiser/run-optimisation';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
-import { DEMO_LIBRARY } from '@shared/optimiser/demo-library';
+import { DEMO_LIBRARY } from '@shared/demo/demo-library';
 import { GAS_MOLAR_VOLUME_L_PER_MOL, ingredientCoefficients, parseIngredient } from '@shared/optimiser/linear-model';
 import { runOptimisation } from '@shared/optimiser/run-optimisation';
 import { chemistryPort } from '@shared/thermal/chemistry-adapter';

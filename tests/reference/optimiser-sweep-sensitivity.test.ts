@@ -1,7 +1,7 @@
 import type { Highs } from 'highs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
-import { DEMO_BRIEFS, DEMO_LIBRARY } from '@shared/optimiser/demo-library';
+import { DEMO_BRIEFS, DEMO_LIBRARY } from '@shared/demo/demo-library';
 import { runOptimisation } from '@shared/optimiser/run-optimisation';
 import { toLpProblem } from '@shared/optimiser/solve-set';
 import { sweepTarget } from '@shared/optimiser/sweep';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
-import { DEMO_LIBRARY } from '@shared/optimiser/demo-library';
+import { DEMO_LIBRARY } from '@shared/demo/demo-library';
 import { runOptimisation } from '@shared/optimiser/run-optimisation';
 import type { OptimiserIngredient } from '@shared/optimiser/types';
 import { chemistryPort } from '@shared/thermal/chemistry-adapter';

@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '@shared/chemistry';
-import { DEMO_BRIEFS, DEMO_LIBRARY } from '@shared/optimiser/demo-library';
+import { DEMO_BRIEFS, DEMO_LIBRARY } from '@shared/demo/demo-library';
 import { runOptimisation } from '@shared/optimiser/run-optimisation';
 import { briefSchema } from '@shared/schemas/briefs';
 import { optimiseOnThread, optimiseThreadsStarted, stopOptimiseThread } from '../../backend/src/runs/optimise-pool';

@@ -4,7 +4,7 @@ import { UserRecord } from '../users/user.model';
 import { Workspace } from '../workspaces/workspace.model';
 import { sequelize } from './sequelize';
 
-/** Invented demo scenario (DESIGN.md §6): an outdoor-gear maker's product team, invented costs. */
+/** Invented demo scenario (DEVELOPERS.md, "Demo data"): an outdoor-gear maker's product team, invented costs. */
 export const DEMO_PASSWORD = 'packwright-demo';
 
 interface SeedWorkspace {

@@ -3,22 +3,13 @@
 // run. Input and output are plain data (structured clone). Cancelling a run terminates the whole
 // thread; the process starts a new one for the next run (optimise-pool.ts).
 import { parentPort } from 'node:worker_threads';
-import type { ChemistryLibrary } from '@shared/chemistry/types';
 import { runOptimisation, sweepTarget } from '@shared/optimiser';
 import type { Brief } from '@shared/schemas/briefs';
 import type { OptimiseThreadMessage, OptimiseThreadReply, OptimiseThreadRequest } from './optimise-thread.types';
 
-// Runs of the same workspace carry equal species data; reusing the first copy keeps the
-// chemistry port's sampled curves (cached per library object) from one run to the next.
-let lastChemistryJson = '';
-let lastChemistry: ChemistryLibrary | null = null;
-function sameChemistry(lib: ChemistryLibrary): ChemistryLibrary {
-  const json = JSON.stringify(lib);
-  if (lastChemistry && json === lastChemistryJson) return lastChemistry;
-  lastChemistryJson = json;
-  lastChemistry = lib;
-  return lib;
-}
+// Runs of the same workspace carry equal species data: the optimiser takes the chemistry model
+// from the one cache per library revision (evaluation/chemistry-cache.ts), so its sampled curves
+// are reused from one run to the next.
 
 /**
  * The target sweep shown beside a run: 13 target temperatures from 6 K on the easy side of the
@@ -54,7 +45,7 @@ parentPort!.on('message', (request: OptimiseThreadRequest) => {
     const result = runOptimisation({
       brief: input.brief,
       ingredients: input.ingredients,
-      chemistry: sameChemistry(input.chemistry),
+      chemistry: input.chemistry,
       calibrations: input.calibrations ?? null,
       onProgress: (done: number, total: number) => {
         runSteps = done;
@@ -63,7 +54,7 @@ parentPort!.on('message', (request: OptimiseThreadRequest) => {
     });
     const optimiseMs = performance.now() - started;
     const sweep = sweepTarget(
-      { brief: input.brief, ingredients: input.ingredients, chemistry: sameChemistry(input.chemistry), calibrations: input.calibrations ?? null },
+      { brief: input.brief, ingredients: input.ingredients, chemistry: input.chemistry, calibrations: input.calibrations ?? null },
       range,
       { run: result, onProgress: (done, total) => report(runSteps + done, runSteps + Math.max(total, sweepSteps)) },
     );

@@ -64,7 +64,7 @@ function isWater(e: HazardCompositionEntry): boolean {
 }
 
 /**
- * Everything computed about a candidate's hazards (DESIGN.md §4.5):
+ * Everything computed about a candidate's hazards (DEVELOPERS.md, "Hazard notes"):
  * 1. the mixture classification and label ({@link classifyMixture});
  * 2. notes: skin contact temperature (cold packs: the minimum; warm packs: the peak; a cold
  *    pack's peak above 40 °C and a warm pack's minimum below 0 °C are checked too), gases against the headspace,

@@ -6,7 +6,7 @@ import { pictogramOf } from './mixture-classification';
 
 /**
  * The hazard-note rules: each a small pure function returning zero or more notes with a stable
- * rule id, a severity and a source. Severity scale (DESIGN.md §4.5):
+ * rule id, a severity and a source. Severity scale (DEVELOPERS.md, "Hazard notes"):
  * - info: worth knowing, no action implied;
  * - caution: a usual precaution applies (label text, instructions for use);
  * - warning: a threshold is reached; the design needs a specific safeguard or a qualified decision;

@@ -3,7 +3,7 @@ import { defaultChemistryLibrary } from '../chemistry';
 import { AN_MAX_MASS_FRACTION } from '../hazards/hazard-notes';
 import { DEMO_HAZARD_DATA_BY_ID } from '../hazards/demo-hazard-data';
 import { candidateSchema } from '../schemas/briefs';
-import { DEMO_LIBRARY } from './demo-library';
+import { DEMO_LIBRARY } from '../demo/demo-library';
 import { enumerateSets } from './enumerate-sets';
 import { runOptimisation } from './run-optimisation';
 

@@ -40,4 +40,3 @@ export { sweepTarget } from './sweep';
 export type { SweepOptions, SweepPoint, SweepResult } from './sweep';
 export { runOptimisation, uselessReason } from './run-optimisation';
 export type { RunOptimisationInput, RunOptimisationOptions, RunOptimisationOutput } from './run-optimisation';
-export { DEMO_BRIEFS, DEMO_LIBRARY, DEMO_WATER_ID } from './demo-library';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { defaultChemistryLibrary } from '../chemistry';
 import { briefSchema } from '../schemas/briefs';
-import { DEMO_LIBRARY } from './demo-library';
+import { DEMO_LIBRARY } from '../demo/demo-library';
 import { runOptimisation } from './run-optimisation';
 
 describe('candidates are the simplest set of their mixture', () => {

@@ -13,35 +13,10 @@ import type { Role } from '../schemas/common';
  * one person cannot sign both stages by holding the administrator role.
  */
 
-export const REVIEW_STATES = [
-  'proposed',
-  'shortlisted',
-  'in-chemistry-review',
-  'in-regulatory-review',
-  'approved',
-  'changes-requested',
-  'rejected',
-] as const;
-export type ReviewState = (typeof REVIEW_STATES)[number];
-
-export const REVIEW_ACTIONS = [
-  'shortlist',
-  'unshortlist',
-  'submit',
-  'chemistry-approve',
-  'chemistry-request-changes',
-  'chemistry-reject',
-  'regulatory-approve',
-  'regulatory-request-changes',
-  'regulatory-reject',
-  'revise',
-] as const;
-export type ReviewAction = (typeof REVIEW_ACTIONS)[number];
-
-export const REVIEW_STAGES = ['chemistry', 'regulatory'] as const;
-export type ReviewStage = (typeof REVIEW_STAGES)[number];
-export const REVIEW_VERDICTS = ['approved', 'changes-requested', 'rejected'] as const;
-export type ReviewVerdict = (typeof REVIEW_VERDICTS)[number];
+// The states, actions, stages and verdicts are data of the API's schemas (schemas/review-states.ts).
+export { REVIEW_ACTIONS, REVIEW_STAGES, REVIEW_STATES, REVIEW_VERDICTS } from '../schemas/review-states';
+export type { ReviewAction, ReviewStage, ReviewState, ReviewVerdict } from '../schemas/review-states';
+import type { ReviewAction, ReviewStage, ReviewState, ReviewVerdict } from '../schemas/review-states';
 
 export interface Transition {
   action: ReviewAction;

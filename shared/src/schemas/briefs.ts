@@ -3,7 +3,7 @@ import { textSchema, MAX_ID } from './common';
 import { candidateHazardsSchema } from './hazards';
 
 /**
- * A brief: what a pack must do (DESIGN.md §1, §4.4) and the optimiser's answer to it.
+ * A brief: what a pack must do (DEVELOPERS.md, "Briefs and the optimiser") and the optimiser's answer to it.
  *
  * Units are in every field name. Temperatures in °C, temperature differences in K, times in
  * minutes, masses in grams, gas volumes in litres at 25 °C and 1 atm, money in the workspace

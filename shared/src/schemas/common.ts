@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-/** The four roles of a workspace member (DESIGN.md §1). */
+/** The four roles of a workspace member (DEVELOPERS.md, "Roles"). */
 export const ROLES = ['designer', 'chemist', 'reviewer', 'admin'] as const;
 export const roleSchema = z.enum(ROLES);
 export type Role = z.infer<typeof roleSchema>;
@@ -156,7 +156,7 @@ export const searchTextSchema = textSchema().trim().max(100, 'must be at most 10
 /** An optional id filter in a query string (`?candidateId=12`). */
 export const idFilterSchema = z.coerce.number({ error: 'must be a whole number' }).int('must be a whole number').positive('must be a positive id').max(MAX_ID, `must be at most ${MAX_ID}`);
 
-/** One error shape for every API failure (DESIGN.md §5). */
+/** One error shape for every API failure (DEVELOPERS.md, "The API"). */
 export const apiErrorSchema = z.object({
   error: z.object({
     code: z.string(),

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { textSchema } from './common';
 
 /**
- * Hazard data and computed hazard notes (DESIGN.md §4.5). The computations live in
+ * Hazard data and computed hazard notes (DEVELOPERS.md, "Hazard notes"). The computations live in
  * shared/src/hazards; these are the shapes stored and sent over the API.
  */
 

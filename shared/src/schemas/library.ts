@@ -3,7 +3,7 @@ import { FormulaError, parseFormula } from '../chemistry/formula';
 import { ingredientProcessSchema } from '../thermal/process';
 import { paged, pagedQuerySchema, searchTextSchema, textSchema, MAX_ID, type FieldError } from './common';
 
-// Species data and the ingredient library (DESIGN.md §3, §5).
+// Species data and the ingredient library (DEVELOPERS.md, "Ingredient processes", "The API").
 
 export const PHASES = ['cr', 'l', 'g', 'aq', 'ai', 'ao'] as const;
 export const phaseSchema = z.enum(PHASES, { error: `must be one of ${PHASES.join(', ')}` });

@@ -6,7 +6,7 @@ import { loadSchema } from './briefs';
 import { idSchema, textSchema } from './common';
 
 /**
- * Payloads of POST /api/mixtures/evaluate (DESIGN.md §5). The request names ingredients by id
+ * Payloads of POST /api/mixtures/evaluate (DEVELOPERS.md, "The API"). The request names ingredients by id
  * (or a bare formula); the backend resolves each to its stored process and calls
  * `evaluateMixture` with the resolved input.
  */

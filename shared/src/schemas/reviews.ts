@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { textSchema, MAX_ID } from './common';
-import { REVIEW_STAGES, REVIEW_STATES, REVIEW_VERDICTS } from '../reviews/state-machine';
+import { REVIEW_STAGES, REVIEW_STATES, REVIEW_VERDICTS } from './review-states';
 import { candidateHazardsSchema, ingredientHazardDataSchema, labelElementsSchema, hazardNoteSchema } from './hazards';
 import { candidateRecordSchema } from './runs';
 import { paged, pagedQuerySchema } from './common';

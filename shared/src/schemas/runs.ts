@@ -76,7 +76,7 @@ export const runSummarySchema = z.object({
 });
 export type RunSummary = z.infer<typeof runSummarySchema>;
 
-/** GET /api/runs/:id (DESIGN.md §5): status, progress, ranked candidates and the infeasible sets. */
+/** GET /api/runs/:id (DEVELOPERS.md, "The API"): status, progress, ranked candidates and the infeasible sets. */
 export const runDetailSchema = runSummarySchema.extend({
   objective: z.string().nullable(),
   objectiveUnit: z.string().nullable(),

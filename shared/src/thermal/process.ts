@@ -17,7 +17,7 @@ import {
 } from './constants';
 
 /**
- * The heat-producing process an ingredient carries (DESIGN.md §4.2). The backend stores the
+ * The heat-producing process an ingredient carries (DEVELOPERS.md, "Ingredient processes"). The backend stores the
  * parsed value as JSON on each ingredient; the thermal model reads it.
  */
 

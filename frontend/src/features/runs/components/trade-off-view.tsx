@@ -18,7 +18,7 @@ import { CandidateConfidence } from '@/components/charts/candidate-confidence';
 type MetricId = 'cost' | 'mass' | 'margin' | 'hazard';
 type Metric = { id: MetricId; label: string; unit: (currency: string) => string; value: (c: CandidateRecord) => number | null; better: 'low' | 'high' };
 
-/** The four figures the Pareto front is taken over (DESIGN.md §4.4). */
+/** The four figures the Pareto front is taken over (DEVELOPERS.md, "Briefs and the optimiser"). */
 const METRICS: readonly Metric[] = [
   { id: 'cost', label: 'Unit cost', unit: (currency) => currency, value: (c) => c.unitCostValue, better: 'low' },
   { id: 'mass', label: 'Pack mass', unit: () => 'g', value: (c) => c.massG, better: 'low' },

@@ -1,7 +1,7 @@
-import { DEMO_WATER_KEY, demoOptimiserLibrary } from '../demo/ingredients';
+import { DEMO_WATER_KEY, demoOptimiserLibrary } from './ingredients';
 import { DEMO_HAZARD_DATA_BY_ID } from '../hazards/demo-hazard-data';
 import type { BriefInput } from '../schemas/briefs';
-import type { OptimiserIngredient } from './types';
+import type { OptimiserIngredient } from '../optimiser/types';
 
 /**
  * The demo ingredient library in the optimiser's shape, from the one demo data module
