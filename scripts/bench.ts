@@ -9,6 +9,7 @@
 //       (autocannon), against a throwaway PostgreSQL and server started here and removed after;
 //   (e) a small run on a fresh optimisation thread (as each run once started) against the
 //       process's long-lived thread;
+//   (f) the gzipped JavaScript the sign-in page and the home page load (scripts/bench/bundle.ts);
 // then the memory of this process (RSS, heap).
 import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -19,7 +20,8 @@ import { DEMO_BRIEFS, DEMO_LIBRARY } from '../shared/src/optimiser/demo-library'
 import { briefSchema } from '../shared/src/schemas/briefs';
 import { optimiseOnThread, stopOptimiseThread } from '../backend/src/runs/optimise-pool';
 import { runOptimiserBench } from './bench/optimiser';
-import { bin, freePort, root, runStep } from './lib/env';
+import { measureFirstScreens } from './bench/bundle';
+import { bin, buildFrontendIfStale, freePort, root, runStep } from './lib/env';
 import { ensureDatabase, startPostgres, type LocalPostgres } from './lib/postgres';
 
 const rows: [string, string][] = [];
@@ -149,6 +151,14 @@ section(`(e) one small run (${small.brief.name}, 1 active) through an optimisati
 row('on a fresh thread (median of 3)', ms(median(freshRuns)));
 row('on the long-lived thread (median of 5)', ms(median(keptRuns)));
 row('ratio fresh / long-lived', (median(freshRuns) / median(keptRuns)).toFixed(1));
+
+// --- (f): first-load JavaScript --------------------------------------------------------------
+console.log('[bench] first-load JavaScript from the build manifest ...');
+await buildFrontendIfStale();
+section('(f) JavaScript a first screen loads (entry + route modules + static imports, gzipped)');
+for (const screen of measureFirstScreens(path.join(root, 'dist'))) {
+  row(screen.screen, `${screen.gzipKiB.toFixed(1)} KiB in ${screen.files.length} files (largest ${screen.files[0]?.file ?? '—'} ${screen.files[0]?.gzipKiB.toFixed(1) ?? ''} KiB)`);
+}
 
 const mem = process.memoryUsage();
 section('memory of this process after the run');

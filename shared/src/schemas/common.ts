@@ -1,16 +1,10 @@
 import { z } from 'zod';
+import { ROLES } from './roles';
 
-/** The four roles of a workspace member (DESIGN.md §1). */
-export const ROLES = ['designer', 'chemist', 'reviewer', 'admin'] as const;
+/** The four roles of a workspace member (DESIGN.md §1); the list and its labels live in roles.ts (no zod). */
+export { ROLES, ROLE_LABELS } from './roles';
 export const roleSchema = z.enum(ROLES);
 export type Role = z.infer<typeof roleSchema>;
-
-export const ROLE_LABELS: Record<Role, string> = {
-  designer: 'Product designer',
-  chemist: 'Chemist',
-  reviewer: 'Regulatory reviewer',
-  admin: 'Administrator',
-};
 
 /** Record ids are positive integers; path parameters arrive as strings. */
 export const idSchema = z.coerce.number().int('must be a whole number').positive('must be a positive id');
