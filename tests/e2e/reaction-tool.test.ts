@@ -84,8 +84,11 @@ describe('the reaction tool answers a pack designer', () => {
     await b.screenshot(page, 'reactions-03-magnesium-390');
 
     // An ion written as in print is accepted.
+    await page.getByLabel('Product 2: state').selectOption('');
     await page.getByLabel('Product 2: formula').fill('Ca2+');
+    // Read as the calcium ion (not "Ca2" with charge +1): the reaction then fails only on balance.
     await page.getByText(/do not balance/).first().waitFor();
+    await b.screenshot(page, 'reactions-04-unbalanced-390');
     await context.close();
   });
 });
