@@ -14,7 +14,7 @@ const featureNames = existsSync(featuresDir) ? readdirSync(featuresDir, { withFi
  * The layers of shared/src, bottom first (DEVELOPERS.md, "Layers of shared/"): a folder imports
  * only folders of lower layers, never a peer of its own layer or anything above it.
  */
-const SHARED_LAYERS = [['chemistry'], ['thermal'], ['schemas'], ['hazards'], ['calibration'], ['evaluation'], ['optimiser', 'lab-logs', 'reviews'], ['demo']];
+const SHARED_LAYERS = [['validation'], ['chemistry'], ['thermal'], ['schemas'], ['hazards'], ['calibration'], ['evaluation'], ['optimiser', 'lab-logs', 'reviews'], ['demo']];
 const SHARED_PURITY = [
   { group: ['@/*', '**/frontend/**', '**/backend/**'], message: 'shared/ is pure: it imports nothing from frontend/ or backend/.' },
   { group: ['node:*', 'fs', 'path', 'http', 'pg', 'sequelize', 'express'], message: 'shared/ does no I/O.' },

@@ -19,6 +19,8 @@ export default defineConfig({
     outDir: fileURLToPath(new URL('./dist', import.meta.url)),
     emptyOutDir: true,
     chunkSizeWarningLimit: 600,
+    // .vite/manifest.json: which chunks each entry and lazy route loads (scripts/bench/bundle.ts reads it).
+    manifest: true,
   },
   server: {
     host: '127.0.0.1',

@@ -11,6 +11,7 @@
 //       process's long-lived thread;
 //   (f) the full run on libraries of 30, 100 and 300 actives (grades of the demo actives), the
 //       300/30 time ratio;
+//   (g) the gzipped JavaScript the sign-in page and the home page load (scripts/bench/bundle.ts);
 // then the memory of this process (RSS, heap).
 import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -22,7 +23,8 @@ import { briefSchema } from '../shared/src/schemas/briefs';
 import { optimiseOnThread, stopOptimiseThread } from '../backend/src/runs/optimise-pool';
 import { runLibraryScaleBench } from './bench/library-scale';
 import { runOptimiserBench } from './bench/optimiser';
-import { bin, freePort, root, runStep } from './lib/env';
+import { measureFirstScreens } from './bench/bundle';
+import { bin, buildFrontendIfStale, freePort, root, runStep } from './lib/env';
 import { ensureDatabase, startPostgres, type LocalPostgres } from './lib/postgres';
 
 const rows: [string, string][] = [];
@@ -162,6 +164,14 @@ section(`(e) one small run (${small.brief.name}, 1 active) through an optimisati
 row('on a fresh thread (median of 3)', ms(median(freshRuns)));
 row('on the long-lived thread (median of 5)', ms(median(keptRuns)));
 row('ratio fresh / long-lived', (median(freshRuns) / median(keptRuns)).toFixed(1));
+
+// --- (g): first-load JavaScript --------------------------------------------------------------
+console.log('[bench] first-load JavaScript from the build manifest ...');
+await buildFrontendIfStale();
+section('(g) JavaScript a first screen loads (entry + route modules + static imports, gzipped)');
+for (const screen of measureFirstScreens(path.join(root, 'dist'))) {
+  row(screen.screen, `${screen.gzipKiB.toFixed(1)} KiB in ${screen.files.length} files (largest ${screen.files[0]?.file ?? '—'} ${screen.files[0]?.gzipKiB.toFixed(1) ?? ''} KiB)`);
+}
 
 const mem = process.memoryUsage();
 section('memory of this process after the run');

@@ -84,8 +84,24 @@ describe('the reaction tool answers a pack designer', () => {
     await b.screenshot(page, 'reactions-03-magnesium-390');
 
     // An ion written as in print is accepted.
+    await page.getByLabel('Product 2: state').selectOption('');
     await page.getByLabel('Product 2: formula').fill('Ca2+');
+    // Read as the calcium ion (not "Ca2" with charge +1): the reaction then fails only on balance.
     await page.getByText(/do not balance/).first().waitFor();
+    await b.screenshot(page, 'reactions-04-unbalanced-390');
+    await context.close();
+  });
+
+  it('a visitor who is not signed in opens the sign-in page without a console error (no session check answered 401)', async () => {
+    const { context, page } = await b.newPage();
+    const errors: string[] = [];
+    page.on('console', (m) => {
+      if (m.type() === 'error') errors.push(m.text());
+    });
+    await page.goto('/sign-in');
+    await page.getByLabel('E-mail').waitFor();
+    await page.waitForTimeout(500);
+    expect(errors).toEqual([]);
     await context.close();
   });
 });

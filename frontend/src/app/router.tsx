@@ -2,7 +2,6 @@ import { useMemo, type ComponentType } from 'react';
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { createBrowserRouter, type LoaderFunction, type ActionFunction, type RouteObject } from 'react-router';
 import { RouterProvider } from 'react-router/dom';
-import { authKeys } from '@/features/auth/api/get-me';
 import { setUnauthorizedHandler, signInHref } from '@/lib/api-client';
 import { RouteError } from '@/components/errors/route-error';
 import { AppSplash } from '@/components/layouts/app-splash';
@@ -88,7 +87,8 @@ export function createAppRouter(queryClient: QueryClient) {
   const router = createBrowserRouter(createRoutes(queryClient));
   // A 401 from any call but login/me means the session ended: forget it and go to sign-in.
   setUnauthorizedHandler((nextPath) => {
-    queryClient.setQueryData(authKeys.me(), null);
+    // The session query's module (and its schema) is loaded lazily: it is not needed to draw the first screen.
+    void import('@/features/auth/api/get-me').then(({ authKeys }) => queryClient.setQueryData(authKeys.me(), null));
     if (window.location.pathname !== '/sign-in') void router.navigate(signInHref(nextPath), { replace: true });
   });
   return router;

@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import { apiErrorSchema, type FieldError } from '@shared/schemas/common';
+import type { FieldError } from '@shared/schemas/common';
 import { rememberSession } from './session';
 
 /**
@@ -151,6 +151,8 @@ async function request<S extends z.ZodType | undefined>(
   const payload = await readJson(response);
 
   if (!response.ok) {
+    // The error envelope's schema (and zod) load on the first error, not with the first screen.
+    const { apiErrorSchema } = await import('@shared/schemas/common');
     const parsed = apiErrorSchema.safeParse(payload);
     const error = new ApiError({
       status: response.status,

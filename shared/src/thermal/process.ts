@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { textSchema } from '../schemas/common';
+import { textSchema } from '../validation/text';
 import {
   DEFAULT_CRYSTALLISATION_DRIVING_K,
   DEFAULT_CRYSTALLISATION_RATE_PER_MIN,

@@ -1,4 +1,5 @@
-import { ROLE_LABELS, type Role } from '@shared/schemas/common';
+import type { Role } from '@shared/schemas/common';
+import { ROLE_LABELS } from '@shared/schemas/roles';
 import { ButtonLink } from '@/components/ui/button';
 import { StatusPage } from './status-page';
 

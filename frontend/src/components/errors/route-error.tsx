@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { isRouteErrorResponse, useRouteError } from 'react-router';
 import type { Role } from '@shared/schemas/common';
-import { ROLES } from '@shared/schemas/common';
+import { ROLES } from '@shared/schemas/roles';
 import { Wordmark } from '@/components/brand/logo-mark';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { errorMessage, isApiError } from '@/lib/api-client';

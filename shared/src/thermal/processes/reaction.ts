@@ -1,12 +1,11 @@
-import { FALLBACK_SOLID_CP_J_PER_GK, WATER_MOLAR_MASS_G_PER_MOL } from '../constants';
-import { ThermalModelError } from '../errors';
-import type { ReactionProcess } from '../process';
-import { phaseOf, type HeatCapacityParts, type MassInventory, type ModelContext, type ProcessRef } from './common';
+import { WATER_MOLAR_MASS_G_PER_MOL } from '../constants';
+import { type HeatCapacityParts, type MassInventory, type ModelContext, type ProcessRef } from './common';
 
 /**
- * Reactions (DESIGN.md §4.2): one extent per reaction, mol of reaction as written. ΔrH from the
- * stored value or by Hess's law from ΔfH° (NBS 1982 via the chemistry port); `H2O(l)` among the
- * reactants is drawn from the pack's liquid water, gas products leave the pack.
+ * Reactions (DEVELOPERS.md, "The product in brief"): one extent per reaction, mol of reaction as
+ * written, set up with their partners from the pack's contents (../reaction-partners.ts: ΔrH
+ * from the stored value or by Hess's law, the limiting reactant, product phases); `H2O(l)` among
+ * the reactants is drawn from the pack's liquid water.
  */
 
 export interface ReactionModel {

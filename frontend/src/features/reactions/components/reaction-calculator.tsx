@@ -90,7 +90,7 @@ export function ReactionCalculator() {
 
   return (
     <div className="grid grid-cols-1 items-start gap-gutter xl:grid-cols-[minmax(0,6fr)_minmax(0,5fr)]">
-      <section aria-labelledby="pack-answers-title" className="order-1 flex min-w-0 flex-col gap-4 xl:order-2">
+      <section aria-labelledby="pack-answers-title" className="order-2 flex min-w-0 flex-col gap-4">
         <div className="flex flex-wrap items-baseline justify-between gap-2">
           <h2 id="pack-answers-title" className="text-lead font-bold text-ink-900">
             What this charge does in a pack
@@ -121,7 +121,7 @@ export function ReactionCalculator() {
         </div>
       </section>
 
-      <section aria-labelledby="charge-title" className="order-2 min-w-0 rounded-card border border-ink-100 bg-surface shadow-card xl:order-1">
+      <section aria-labelledby="charge-title" className="order-1 min-w-0 rounded-card border border-ink-100 bg-surface shadow-card">
         <header className="border-b border-ink-100 px-5 py-4">
           <h2 id="charge-title" className="text-lead font-bold text-ink-900">
             The charge
@@ -215,7 +215,8 @@ function TermList({
         {withMass && <span>Grams</span>}
       </div>
       {terms.fields.map((field, k) => (
-        <div key={field.id} className={cn('grid grid-cols-[4.5rem_minmax(0,1fr)] items-start gap-2 border-b border-ink-100 pb-2 sm:border-0 sm:pb-0', columns)}>
+        // On a phone: moles and formula on one line, state, grams and Remove on the next.
+        <div key={field.id} className={cn('grid grid-cols-[4rem_minmax(0,1fr)_5.5rem_auto] items-start gap-2 border-b border-ink-100 pb-2 sm:border-0 sm:pb-0', columns)}>
           <TextField label={`${singular} ${k + 1}: moles in the reaction`} hideLabel inputMode="decimal" error={errorOf(`${side}.${k}.coef`)} {...register(`${side}.${k}.coef`)} />
           <TextField
             label={`${singular} ${k + 1}: formula`}
@@ -223,10 +224,11 @@ function TermList({
             autoComplete="off"
             spellCheck={false}
             placeholder="e.g. CaO, Ca2+"
+            containerClassName="col-span-3 sm:col-span-1"
             error={errorOf(`${side}.${k}.formula`)}
             {...register(`${side}.${k}.formula`)}
           />
-          <SelectField label={`${singular} ${k + 1}: state`} hideLabel error={errorOf(`${side}.${k}.phase`)} {...register(`${side}.${k}.phase`)}>
+          <SelectField label={`${singular} ${k + 1}: state`} hideLabel containerClassName="col-span-2 sm:col-span-1" error={errorOf(`${side}.${k}.phase`)} {...register(`${side}.${k}.phase`)}>
             <option value="">as written</option>
             {PHASES.map((p) => (
               <option key={p} value={p}>

@@ -9,6 +9,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { QueryError } from '@/components/ui/query-error';
 import { Loading } from '@/components/ui/spinner';
 import { formatNumber } from '@/lib/format';
+import { Formula, phaseInWords } from '@/components/ui/formula';
 import { useSpecies, type SpeciesListParams } from '../api/get-species';
 
 export const PHASE_NAMES: Record<(typeof PHASES)[number], string> = {
@@ -126,11 +127,11 @@ function SpeciesTable({ species, stale }: { species: Species[]; stale: boolean }
           {species.map((s) => (
             <tr key={s.id}>
               <th scope="row" className="px-5 py-2 text-left align-top font-normal">
-                <span className="font-mono font-bold text-ink-900">{s.formula}</span>
+                <Formula text={s.formula} className="font-bold text-ink-900" />
                 <span className="block text-caption text-ink-500">{s.name}</span>
               </th>
               <td className="px-3 py-2 align-top">
-                <span title={PHASE_NAMES[s.phase]}>{s.phase}</span>
+                <span title={PHASE_NAMES[s.phase]}>{phaseInWords(s.phase)}</span>
                 {s.scope === 'workspace' && (
                   <Badge tone="caution" className="ml-2">
                     {s.correctsId ? 'corrected here' : 'added here'}
