@@ -6,7 +6,7 @@ import { AppError } from '../http/errors';
 import { validate, validated } from '../http/validate';
 import { passport } from './passport';
 import { requireAuth } from './auth.middleware';
-import { confirmPasswordReset, PASSWORD_RESET_ANSWER, recordLogin, requestPasswordReset } from './auth.service';
+import { confirmPasswordReset, endSessions, PASSWORD_RESET_ANSWER, recordLogin, requestPasswordReset } from './auth.service';
 import { clearSessionCookie, issueSessionToken, setSessionCookie } from './session-token';
 import { toSessionUser } from './session-user';
 import './auth.openapi';
@@ -52,7 +52,9 @@ authRouter.post('/login', loginLimiter, validate({ body: loginRequestSchema }), 
   })(req, res, next);
 });
 
-authRouter.post('/logout', requireAuth, (_req, res) => {
+/** Logout ends the session for real: the token presented (cookie or bearer) and every older one stop working. */
+authRouter.post('/logout', requireAuth, async (req, res) => {
+  await endSessions(req.user!.id);
   clearSessionCookie(res);
   res.status(204).end();
 });
