@@ -38,7 +38,7 @@ try {
     FUZZ_REPORT: report,
   };
   if ((await runStep('db', bin('tsx'), [path.join(root, 'scripts', 'db-setup.ts')], env)) !== 0) throw new Error('database setup failed');
-  const code = await runStep('fuzz', bin('vitest'), ['run', '--project', 'api', 'tests/api/fuzz.test.ts'], env);
+  const code = await runStep('fuzz', bin('vitest'), ['run', '--project', 'api', '--hookTimeout', '300000', 'tests/api/fuzz.test.ts'], env);
   if (!existsSync(report)) throw new Error(`the fuzz suite wrote no report (exit code ${code})`);
   const result = JSON.parse(readFileSync(report, 'utf8')) as { requests: number; elapsedS: number; byStatus: Record<string, number>; serverErrors: number; serverErrorSamples: string[] };
   console.log(`\n[fuzz] ${result.requests} requests (seed ${seed}) in ${result.elapsedS.toFixed(1)} s: ${result.serverErrors} × 5xx`);
