@@ -72,12 +72,20 @@ describe('session', () => {
   });
 
   it('logout clears the cookie', async () => {
+    // Logout ends every session of the member (token version): a member of its own, so the
+    // demo members' sessions in other test files stay valid.
+    const { UserRecord } = await import('../../backend/src/users/user.model');
+    const { hashPassword } = await import('../../backend/src/auth/passwords');
+    const chemist = (await UserRecord.findOne({ where: { email: demo.chemist } }))!;
+    const email = uniqueEmail('logout');
+    const member = await UserRecord.create({ workspaceId: chemist.workspaceId, email, name: 'Logout Tester', passwordHash: await hashPassword('packwright-demo'), role: 'chemist' });
     const agent = request.agent(h.app);
-    await agent.post('/api/auth/login').send({ email: demo.chemist, password: 'packwright-demo' });
+    await agent.post('/api/auth/login').send({ email, password: 'packwright-demo' });
     const origin = 'http://127.0.0.1';
     const out = await agent.post('/api/auth/logout').set('Origin', origin).set('Host', '127.0.0.1');
     expect(out.status).toBe(204);
     expect((await agent.get('/api/auth/me')).status).toBe(401);
+    await member.destroy();
   });
 
   it('a cookie-authenticated write from another origin is refused', async () => {

@@ -6,7 +6,7 @@ import { validate, validated } from '../http/validate';
 import { LoginLimiter } from './login-limiter';
 import { passport } from './passport';
 import { requireAuth } from './auth.middleware';
-import { confirmPasswordReset, PASSWORD_RESET_ANSWER, recordLogin, requestPasswordReset } from './auth.service';
+import { confirmPasswordReset, endSessions, PASSWORD_RESET_ANSWER, recordLogin, requestPasswordReset } from './auth.service';
 import { clearSessionCookie, issueSessionToken, setSessionCookie } from './session-token';
 import { toSessionUser } from './session-user';
 import './auth.openapi';
@@ -56,7 +56,9 @@ authRouter.post('/login', validate({ body: loginRequestSchema }), (req, res, nex
   })(req, res, next);
 });
 
-authRouter.post('/logout', requireAuth, (req, res) => {
+/** Logout ends the session for real: the token presented (cookie or bearer) and every older one stop working. */
+authRouter.post('/logout', requireAuth, async (req, res) => {
+  await endSessions(req.user!.id);
   clearSessionCookie(req, res);
   res.status(204).end();
 });

@@ -97,3 +97,11 @@ export async function confirmPasswordReset(token: string, password: string): Pro
     await recordAudit({ workspaceId: user.workspaceId, actorId: user.id, action: 'user.password_reset', entityType: 'user', entityId: user.id, detail: { otherLinksRevoked: revoked } }, transaction);
   });
 }
+
+/**
+ * Ends the member's sessions: the token version goes up, so every token issued before (this
+ * bearer token, the cookie, other devices) stops working at once (passport.ts compares `tv`).
+ */
+export async function endSessions(userId: number): Promise<void> {
+  await UserRecord.increment({ tokenVersion: 1 }, { where: { id: userId } });
+}

@@ -2,6 +2,8 @@ import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import type { Request } from 'express';
+import { z } from 'zod';
+import { MAX_ID } from '@shared/schemas';
 import { config } from '../config';
 import { UserRecord } from '../users/user.model';
 import { Workspace } from '../workspaces/workspace.model';
@@ -16,6 +18,21 @@ export interface SessionTokenPayload {
   /** The user's token version when the token was issued; a bump revokes older tokens. */
   tv: number;
 }
+
+/**
+ * What a signed token must carry to be a session: a numeric user id within the id range, the
+ * workspace, the token version and an expiry. A token signed with our secret but lacking any of
+ * these (an old or hand-made token) is refused as no session, never looked up.
+ */
+const sessionPayloadSchema = z.object({
+  sub: z
+    .string()
+    .regex(/^[1-9]\d{0,9}$/)
+    .refine((s) => Number(s) <= MAX_ID),
+  ws: z.number().int().positive().max(MAX_ID),
+  tv: z.number().int().min(0).max(MAX_ID),
+  exp: z.number().finite(),
+});
 
 function cookieExtractor(req: Request): string | null {
   const cookies = req.cookies as Record<string, string> | undefined;
@@ -55,8 +72,11 @@ passport.use(
       algorithms: ['HS256'],
       issuer: 'packwright',
     },
-    async (payload: SessionTokenPayload, done: (err: unknown, user?: Express.User | false) => void) => {
+    async (raw: unknown, done: (err: unknown, user?: Express.User | false) => void) => {
       try {
+        const parsed = sessionPayloadSchema.safeParse(raw);
+        if (!parsed.success) return done(null, false);
+        const payload = parsed.data;
         const user = await findActiveUser({ id: Number(payload.sub) });
         if (!user || user.disabled || user.tokenVersion !== payload.tv || user.workspaceId !== payload.ws) {
           return done(null, false);

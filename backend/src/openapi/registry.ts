@@ -17,6 +17,8 @@ interface RouteDoc {
   /** Omit for public routes. */
   roles?: Role[] | 'any';
   body?: z.ZodType;
+  /** A multipart/form-data upload: its fields (a file is `z.string().meta({ format: 'binary' })`). */
+  multipart?: z.ZodObject;
   query?: z.ZodObject;
   params?: z.ZodObject;
   response?: z.ZodType;
@@ -52,6 +54,7 @@ export function documentRoute(doc: RouteDoc): void {
       ...(doc.params ? { params: doc.params } : {}),
       ...(doc.query ? { query: doc.query } : {}),
       ...(doc.body ? { body: { content: { 'application/json': { schema: doc.body } }, required: true } } : {}),
+      ...(doc.multipart ? { body: { content: { 'multipart/form-data': { schema: doc.multipart } }, required: true } } : {}),
     },
     responses,
   });
