@@ -1,18 +1,19 @@
 import { Router } from 'express';
 import { createBriefRequestSchema, updateBriefRequestSchema } from '@shared/schemas/briefs';
-import { briefIdParamsSchema } from '@shared/schemas/runs';
+import { briefIdParamsSchema, briefListQuerySchema } from '@shared/schemas/runs';
 import { requireAuth, requireRole } from '../auth/auth.middleware';
 import { validate, validated } from '../http/validate';
 import { createRun, listRuns } from '../runs/runs.service';
-import { createBrief, deleteBrief, duplicateBrief, getBrief, listBriefs, updateBrief } from './briefs.service';
+import { createBrief, deleteBrief, duplicateBrief, getBrief, listBriefs, setBriefArchived, updateBrief } from './briefs.service';
 import './briefs.openapi';
 
 export const briefsRouter = Router();
 briefsRouter.use(requireAuth);
 const writers = requireRole('designer', 'admin');
 
-briefsRouter.get('/', async (req, res) => {
-  res.json({ briefs: await listBriefs(req.user!.workspaceId) });
+briefsRouter.get('/', validate({ query: briefListQuerySchema }), async (req, res) => {
+  const { query } = validated(res, { query: briefListQuerySchema });
+  res.json({ briefs: await listBriefs(req.user!.workspaceId, query.archived === 'true') });
 });
 
 briefsRouter.post('/', writers, validate({ body: createBriefRequestSchema }), async (req, res) => {
@@ -39,6 +40,16 @@ briefsRouter.delete('/:id', writers, validate({ params: briefIdParamsSchema }), 
   const { params } = validated(res, { params: briefIdParamsSchema });
   await deleteBrief(req.user!, params.id);
   res.status(204).end();
+});
+
+briefsRouter.post('/:id/archive', writers, validate({ params: briefIdParamsSchema }), async (req, res) => {
+  const { params } = validated(res, { params: briefIdParamsSchema });
+  res.json({ brief: await setBriefArchived(req.user!, params.id, true) });
+});
+
+briefsRouter.post('/:id/unarchive', writers, validate({ params: briefIdParamsSchema }), async (req, res) => {
+  const { params } = validated(res, { params: briefIdParamsSchema });
+  res.json({ brief: await setBriefArchived(req.user!, params.id, false) });
 });
 
 briefsRouter.get('/:id/runs', validate({ params: briefIdParamsSchema }), async (req, res) => {

@@ -2,6 +2,7 @@ import { briefSchema, updateBriefRequestSchema, type Brief, type BriefInput } fr
 import type { BriefRecord as BriefDto } from '@shared/schemas/runs';
 import { fieldErrorsFromZod } from '@shared/schemas';
 import type { z } from 'zod';
+import { Op } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { AppError } from '../http/errors';
 import { recordAudit } from '../audit/audit.service';
@@ -14,7 +15,11 @@ import { BriefRecord, BriefVersionRecord } from './brief.model';
 const withPeople = [
   { model: UserRecord, as: 'createdBy', attributes: ['name'] },
   { model: UserRecord, as: 'updatedBy', attributes: ['name'] },
+  { model: UserRecord, as: 'archivedBy', attributes: ['name'] },
 ];
+
+/** Candidate states that make a review record: submitted, in review, or decided. */
+const REVIEWED_STATES = ['in-chemistry-review', 'in-regulatory-review', 'approved', 'changes-requested', 'rejected'] as const;
 
 async function toDto(b: BriefRecord): Promise<BriefDto> {
   const last = await RunRecord.findOne({ where: { briefId: b.id }, order: [['createdAt', 'DESC'], ['id', 'DESC']], attributes: ['id', 'status', 'createdAt'] });
@@ -30,11 +35,18 @@ async function toDto(b: BriefRecord): Promise<BriefDto> {
     createdAt: b.createdAt.toISOString(),
     updatedAt: b.updatedAt.toISOString(),
     lastRun: last ? { id: last.id, status: last.status, createdAt: last.createdAt.toISOString(), candidates } : null,
+    archivedAt: b.archivedAt ? b.archivedAt.toISOString() : null,
+    archivedBy: b.archivedAt ? (b.archivedBy?.name ?? '') : null,
   };
 }
 
-export async function listBriefs(workspaceId: number): Promise<BriefDto[]> {
-  const rows = await BriefRecord.findAll({ where: { workspaceId }, include: withPeople, order: [['updatedAt', 'DESC']] });
+/** Active briefs by default; `archived` lists the archived ones instead (each stays reachable by id). */
+export async function listBriefs(workspaceId: number, archived = false): Promise<BriefDto[]> {
+  const rows = await BriefRecord.findAll({
+    where: { workspaceId, archivedAt: archived ? { [Op.ne]: null } : null },
+    include: withPeople,
+    order: [[archived ? 'archivedAt' : 'updatedAt', 'DESC']],
+  });
   return Promise.all(rows.map(toDto));
 }
 
@@ -66,6 +78,7 @@ export async function updateBrief(actor: AuthUser, id: number, change: z.output<
   await sequelize.transaction(async (transaction) => {
     const brief = await BriefRecord.findOne({ where: { id, workspaceId: actor.workspaceId }, transaction, lock: transaction.LOCK.UPDATE });
     if (!brief) throw AppError.notFound('Brief');
+    refuseIfArchived(brief, 'changed');
     if (brief.version !== change.version) throw AppError.staleVersion('brief');
     const { version: _version, ...fields } = change;
     const merged = briefSchema.safeParse({ ...(brief.spec as BriefInput), ...stripUndefined(fields) });
@@ -84,15 +97,61 @@ export async function duplicateBrief(actor: AuthUser, id: number): Promise<Brief
   return createBrief(actor, { ...source.spec, name });
 }
 
+/** An archived brief is read-only: it can be read, copied and unarchived, not changed or run. */
+export function refuseIfArchived(brief: BriefRecord, what: 'changed' | 'run'): void {
+  if (!brief.archivedAt) return;
+  throw AppError.conflict(`This brief is archived, so it cannot be ${what}. Unarchive it first, or duplicate it.`, 'brief_archived');
+}
+
+function plural(n: number, one: string, many = `${one}s`) {
+  return `${n} ${n === 1 ? one : many}`;
+}
+
+/**
+ * Deletes a brief with its runs and candidates. Refused (409) while candidates are shortlisted,
+ * and always once any candidate was submitted for review: a reviewed or signed-off candidate is
+ * a regulatory record, so such a brief can only be archived. The audit trail is kept either way.
+ */
 export async function deleteBrief(actor: AuthUser, id: number): Promise<void> {
   await sequelize.transaction(async (transaction) => {
     const brief = await BriefRecord.findOne({ where: { id, workspaceId: actor.workspaceId }, transaction, lock: transaction.LOCK.UPDATE });
     if (!brief) throw AppError.notFound('Brief');
+    const rows = (await CandidateRecord.findAll({
+      where: { briefId: id, workspaceId: actor.workspaceId, state: { [Op.in]: [...REVIEWED_STATES] } },
+      attributes: ['state', [sequelize.fn('COUNT', sequelize.col('id')), 'n']],
+      group: ['state'],
+      raw: true,
+      transaction,
+    })) as unknown as { state: string; n: string }[];
+    const count = (states: readonly string[]) => rows.filter((r) => states.includes(r.state)).reduce((a, r) => a + Number(r.n), 0);
+    const inReview = count(['in-chemistry-review', 'in-regulatory-review']);
+    const decided = count(['approved', 'changes-requested', 'rejected']);
+    if (inReview + decided > 0) {
+      const parts = [inReview ? `${plural(inReview, 'candidate')} in review` : '', decided ? `${plural(decided, 'candidate')} with a review decision (${plural(count(['approved']), 'signed off', 'signed off')})` : ''].filter(Boolean);
+      throw AppError.conflict(
+        `This brief cannot be deleted: it has ${parts.join(' and ')}, and their reviews are regulatory records. Archive the brief instead: it leaves the list of briefs, and stays readable with its runs, candidates and review history.`,
+        'brief_has_reviews',
+      );
+    }
     const shortlisted = await CandidateRecord.count({ where: { briefId: id, state: 'shortlisted' }, transaction });
-    if (shortlisted > 0) throw AppError.conflict('This brief has shortlisted candidates; it cannot be deleted.', 'has_shortlist');
+    if (shortlisted > 0) throw AppError.conflict(`This brief has ${plural(shortlisted, 'shortlisted candidate')}; take them off the shortlist or archive the brief instead.`, 'has_shortlist');
     await recordAudit({ workspaceId: actor.workspaceId, actorId: actor.id, action: 'brief.delete', entityType: 'brief', entityId: brief.id, detail: { name: brief.name } }, transaction);
     await brief.destroy({ transaction });
   });
+}
+
+/** Archives (or unarchives) a brief; recorded in the audit trail. Archiving twice answers 409. */
+export async function setBriefArchived(actor: AuthUser, id: number, archived: boolean): Promise<BriefDto> {
+  await sequelize.transaction(async (transaction) => {
+    const brief = await BriefRecord.findOne({ where: { id, workspaceId: actor.workspaceId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!brief) throw AppError.notFound('Brief');
+    if (Boolean(brief.archivedAt) === archived) {
+      throw AppError.conflict(archived ? 'This brief is already archived.' : 'This brief is not archived.', archived ? 'already_archived' : 'not_archived');
+    }
+    await brief.update({ archivedAt: archived ? new Date() : null, archivedById: archived ? actor.id : null }, { transaction, silent: true });
+    await recordAudit({ workspaceId: actor.workspaceId, actorId: actor.id, action: archived ? 'brief.archive' : 'brief.unarchive', entityType: 'brief', entityId: brief.id, detail: { name: brief.name } }, transaction);
+  });
+  return getBrief(actor.workspaceId, id);
 }
 
 function stripUndefined<T extends object>(o: T): Partial<T> {

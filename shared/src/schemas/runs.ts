@@ -23,9 +23,16 @@ export const briefRecordSchema = z.object({
   lastRun: z
     .object({ id: z.number(), status: z.string(), createdAt: z.string(), candidates: z.number() })
     .nullable(),
+  /** When the brief was archived (null while active) and by whom. */
+  archivedAt: z.string().nullable(),
+  archivedBy: z.string().nullable(),
 });
 export type BriefRecord = z.infer<typeof briefRecordSchema>;
 export const briefListResponseSchema = z.object({ briefs: z.array(briefRecordSchema) });
+/** GET /api/briefs: active briefs by default; `archived=true` lists the archived ones instead. */
+export const briefListQuerySchema = z.object({
+  archived: z.enum(['true', 'false'], { error: 'must be true or false' }).optional(),
+});
 
 export const RUN_STATUSES = ['queued', 'running', 'succeeded', 'failed', 'cancelled'] as const;
 export const runStatusSchema = z.enum(RUN_STATUSES);

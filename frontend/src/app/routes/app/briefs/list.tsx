@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
+import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { ButtonLink } from '@/components/ui/button';
 import { Card, CardBody, CardHeader } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
@@ -15,13 +15,14 @@ export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     await requireUser(queryClient, request);
-    void queryClient.prefetchQuery(getBriefsQueryOptions());
+    void queryClient.prefetchQuery(getBriefsQueryOptions(new URL(request.url).searchParams.get('archived') === '1'));
     return null;
   };
 
 export default function BriefsRoute() {
   const me = useSessionUser();
-  const briefs = useBriefs();
+  const archived = useSearchParams()[0].get('archived') === '1';
+  const briefs = useBriefs(archived);
   const canWrite = hasRole(me, ['designer', 'admin']);
   const newBrief = canWrite ? <ButtonLink to="/briefs/new">New brief</ButtonLink> : undefined;
   return (
@@ -33,14 +34,33 @@ export default function BriefsRoute() {
         action={newBrief}
       />
       <Card>
-        <CardHeader title="All briefs" description={briefs.data ? formatCount(briefs.data.length, 'brief') : undefined} />
+        <CardHeader
+          title={archived ? 'Archived briefs' : 'Active briefs'}
+          description={
+            <>
+              {briefs.data ? `${formatCount(briefs.data.length, 'brief')} · ` : ''}
+              {archived ? (
+                <>
+                  Archived briefs are read-only; open one to unarchive it.{' '}
+                  <Link to="/briefs" className="font-semibold text-frost-700 hover:underline">
+                    Back to the active briefs
+                  </Link>
+                </>
+              ) : (
+                <Link to="/briefs?archived=1" className="font-semibold text-frost-700 hover:underline">
+                  Show the archived briefs
+                </Link>
+              )}
+            </>
+          }
+        />
         <CardBody>
           {briefs.isPending ? (
             <Loading label="Loading the briefs…" />
           ) : briefs.isError ? (
             <QueryError error={briefs.error} onRetry={() => void briefs.refetch()} retrying={briefs.isFetching} />
           ) : (
-            <BriefsTable briefs={briefs.data} canWrite={canWrite} newAction={newBrief} />
+            <BriefsTable briefs={briefs.data} canWrite={canWrite} newAction={archived ? undefined : newBrief} archived={archived} />
           )}
         </CardBody>
       </Card>
