@@ -42,7 +42,7 @@ describe('NUL characters and lone surrogates in request text', () => {
     expectRefused(await request(h.app).post('/api/ingredients').set(bearer()).send(ingredient({ grade: LONE_LOW })), 'grade', /lone UTF-16 surrogate/);
     expectRefused(await request(h.app).post('/api/ingredients').set(bearer()).send(ingredient({ sources: ['CRC Handbook', NUL] })), 'sources.1', /NUL/);
     const list = await request(h.app).get('/api/ingredients').query({ q: tag }).set(bearer());
-    expect(list.body.ingredients).toEqual([]);
+    expect(list.body.items).toEqual([]);
   });
 
   it('a well-formed surrogate pair (an emoji) is ordinary text and is kept as sent', async () => {
@@ -71,7 +71,7 @@ describe('NUL characters and lone surrogates in request text', () => {
 
   it('an uploaded file whose name carries NUL is refused (400 naming the file field), not stored renamed', async () => {
     const list = await request(h.app).get('/api/ingredients').query({ pageSize: 1 }).set(bearer());
-    const id = list.body.ingredients[0].id;
+    const id = list.body.items[0].id;
     const form = (filename: string, type: string, content: string) =>
       `--XX\r\nContent-Disposition: form-data; name="file"; filename*=UTF-8''${filename}\r\nContent-Type: ${type}\r\n\r\n${content}\r\n--XX--\r\n`;
     for (const [path, type, content] of [

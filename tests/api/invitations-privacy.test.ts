@@ -26,7 +26,7 @@ describe('inviting an address that belongs to another workspace', () => {
     expect(taken.body.invitation).toMatchObject({ email: demo.chemist, status: 'pending' });
 
     const list = await request(h.app).get('/api/invitations').set(bearer(admin));
-    const listed = list.body.invitations.find((i: { id: number }) => i.id === taken.body.invitation.id);
+    const listed = list.body.items.find((i: { id: number }) => i.id === taken.body.invitation.id);
     expect(listed).toMatchObject({ status: 'pending', email: demo.chemist });
 
     // The workspace's records do not tell either: its audit entry has the same detail as any invitation.
@@ -82,7 +82,7 @@ describe('a second invitation to the same address', () => {
     expect(secondLink).not.toBe(firstLink);
 
     const list = await request(h.app).get('/api/invitations').set(bearer(admin));
-    const statuses = list.body.invitations.filter((i: { email: string }) => i.email === email).map((i: { id: number; status: string }) => [i.id, i.status]);
+    const statuses = list.body.items.filter((i: { email: string }) => i.email === email).map((i: { id: number; status: string }) => [i.id, i.status]);
     expect(statuses).toEqual([
       [second.body.invitation.id, 'pending'],
       [first.body.invitation.id, 'revoked'],

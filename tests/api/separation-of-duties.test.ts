@@ -58,7 +58,7 @@ async function toRegulatoryReview(candidateId: number, chemistToken: string) {
 
 async function setRole(userId: number, role: string) {
   const admin = await h.token(demo.admin);
-  const users = (await request(h.app).get('/api/users').set(bearer(admin))).body.users as { id: number; version: number }[];
+  const users = (await request(h.app).get('/api/users').set(bearer(admin))).body.items as { id: number; version: number }[];
   const version = users.find((u) => u.id === userId)!.version;
   const res = await request(h.app).patch(`/api/users/${userId}`).set(bearer(admin)).send({ role, version });
   expect(res.status).toBe(200);
@@ -112,7 +112,7 @@ describe('separation of duties', () => {
     expect(events[0]!.actorId).toBe(admin!.id);
     expect(events[0]!.detail).toEqual({ email: casey.email, from: 'chemist', to: 'reviewer', reviewDecisionsSoFar: 0 });
     // A change that leaves the role as it is (disabling) adds no role-change entry.
-    const users = (await request(h.app).get('/api/users').set(bearer(await h.token(demo.admin)))).body.users as { id: number; version: number }[];
+    const users = (await request(h.app).get('/api/users').set(bearer(await h.token(demo.admin)))).body.items as { id: number; version: number }[];
     await request(h.app).patch(`/api/users/${casey.id}`).set(bearer(await h.token(demo.admin))).send({ disabled: true, version: users.find((u) => u.id === casey.id)!.version });
     expect(await AuditEventRecord.count({ where: { action: 'user.role_change', entityId: String(casey.id) } })).toBe(1);
   });

@@ -10,7 +10,7 @@ let ingredientId = 0;
 beforeAll(async () => {
   token = await h.token(demo.chemist);
   const list = await request(h.app).get('/api/ingredients').query({ pageSize: 1 }).set('Authorization', `Bearer ${token}`);
-  ingredientId = list.body.ingredients[0].id;
+  ingredientId = list.body.items[0].id;
 });
 
 const routes = () => ['/api/lab-logs/preview', '/api/lab-logs', '/api/ingredients/import', `/api/ingredients/${ingredientId}/attachments`];

@@ -13,10 +13,14 @@ export class BriefRecord extends Model<InferAttributes<BriefRecord>, InferCreati
   declare version: CreationOptional<number>;
   declare createdById: number | null;
   declare updatedById: number | null;
+  /** Set while the brief is archived: out of the default list, read-only, still reachable. */
+  declare archivedAt: CreationOptional<Date | null>;
+  declare archivedById: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare createdBy?: NonAttribute<UserRecord | null>;
   declare updatedBy?: NonAttribute<UserRecord | null>;
+  declare archivedBy?: NonAttribute<UserRecord | null>;
 }
 
 BriefRecord.init(
@@ -29,6 +33,8 @@ BriefRecord.init(
     version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     createdById: { type: DataTypes.INTEGER, allowNull: true },
     updatedById: { type: DataTypes.INTEGER, allowNull: true },
+    archivedAt: { type: DataTypes.DATE, allowNull: true },
+    archivedById: { type: DataTypes.INTEGER, allowNull: true },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
@@ -36,6 +42,7 @@ BriefRecord.init(
 );
 BriefRecord.belongsTo(UserRecord, { foreignKey: 'createdById', as: 'createdBy', constraints: false });
 BriefRecord.belongsTo(UserRecord, { foreignKey: 'updatedById', as: 'updatedBy', constraints: false });
+BriefRecord.belongsTo(UserRecord, { foreignKey: 'archivedById', as: 'archivedBy', constraints: false });
 
 /** Every saved version of a brief, so a run can always show what it was asked. */
 export class BriefVersionRecord extends Model<InferAttributes<BriefVersionRecord>, InferCreationAttributes<BriefVersionRecord>> {

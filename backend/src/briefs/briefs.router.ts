@@ -4,7 +4,7 @@ import { briefIdParamsSchema, briefListQuerySchema, runListQuerySchema } from '@
 import { requireAuth, requireRole } from '../auth/auth.middleware';
 import { validate, validated } from '../http/validate';
 import { createRun, listRuns } from '../runs/runs.service';
-import { createBrief, deleteBrief, duplicateBrief, getBrief, listBriefs, updateBrief } from './briefs.service';
+import { createBrief, deleteBrief, duplicateBrief, getBrief, listBriefs, setBriefArchived, updateBrief } from './briefs.service';
 import './briefs.openapi';
 
 export const briefsRouter = Router();
@@ -40,6 +40,16 @@ briefsRouter.delete('/:id', writers, validate({ params: briefIdParamsSchema }), 
   const { params } = validated(res, { params: briefIdParamsSchema });
   await deleteBrief(req.user!, params.id);
   res.status(204).end();
+});
+
+briefsRouter.post('/:id/archive', writers, validate({ params: briefIdParamsSchema }), async (req, res) => {
+  const { params } = validated(res, { params: briefIdParamsSchema });
+  res.json({ brief: await setBriefArchived(req.user!, params.id, true) });
+});
+
+briefsRouter.post('/:id/unarchive', writers, validate({ params: briefIdParamsSchema }), async (req, res) => {
+  const { params } = validated(res, { params: briefIdParamsSchema });
+  res.json({ brief: await setBriefArchived(req.user!, params.id, false) });
 });
 
 briefsRouter.get('/:id/runs', validate({ params: briefIdParamsSchema, query: runListQuerySchema }), async (req, res) => {

@@ -68,3 +68,11 @@ export async function startMailWorker(): Promise<void> {
     localWorkers.push(id);
   }
 }
+
+/** Stops this process's mail workers (queued jobs wait for the next worker); startMailWorker starts them again. */
+export async function stopMailWorker(): Promise<void> {
+  if (localWorkers.length === 0) return;
+  const boss = await getBoss();
+  await Promise.all(localWorkers.map((id) => boss.offWork({ id })));
+  localWorkers.length = 0;
+}

@@ -7,7 +7,7 @@ import { pageOf, pageWindow, sortColumn } from '../http/paging';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthUser } from '../auth/session-user';
 import { UserRecord } from '../users/user.model';
-import { findBrief } from '../briefs/briefs.service';
+import { findBrief, refuseIfArchived } from '../briefs/briefs.service';
 import { CandidateRecord } from '../candidates/candidate.model';
 import { IngredientRecord } from '../ingredients/ingredient.model';
 import { workspaceChemistryLibrary } from '../species/species.service';
@@ -71,6 +71,7 @@ export function toOptimiserIngredient(r: IngredientRecord): OptimiserIngredient 
 /** Freezes the brief and the data, stores a queued run and sends its job; answers the run id. */
 export async function createRun(actor: AuthUser, briefId: number): Promise<number> {
   const brief = await findBrief(actor.workspaceId, briefId);
+  refuseIfArchived(brief, 'run');
   const [ingredients, chemistry] = await Promise.all([
     IngredientRecord.findAll({ where: { workspaceId: actor.workspaceId }, order: [['id', 'ASC']] }),
     workspaceChemistryLibrary(actor.workspaceId),

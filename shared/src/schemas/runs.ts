@@ -25,13 +25,18 @@ export const briefRecordSchema = z.object({
   lastRun: z
     .object({ id: z.number(), status: z.string(), createdAt: z.string(), candidates: z.number() })
     .nullable(),
+  /** When the brief was archived (null while active) and by whom. */
+  archivedAt: z.string().nullable(),
+  archivedBy: z.string().nullable(),
 });
 export type BriefRecord = z.infer<typeof briefRecordSchema>;
-/** GET /api/briefs: a page of the workspace's briefs, searched by name, filtered by pack type. */
+/** GET /api/briefs: a page of the workspace's active (or archived) briefs, searched by name, filtered by pack type. */
 export const BRIEF_SORT_KEYS = ['name', 'updatedAt', 'createdAt'] as const;
 export const briefListQuerySchema = pagedQuerySchema(BRIEF_SORT_KEYS, '-updatedAt').extend({
   q: searchTextSchema.optional(),
   packType: z.enum(['cold', 'warm'], { error: 'must be cold or warm' }).optional(),
+  /** Active briefs by default; `archived=true` lists the archived ones instead. */
+  archived: z.enum(['true', 'false'], { error: 'must be true or false' }).optional(),
 });
 export type BriefListQuery = z.output<typeof briefListQuerySchema>;
 export const briefListResponseSchema = paged(briefRecordSchema);

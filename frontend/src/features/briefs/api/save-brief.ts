@@ -21,6 +21,18 @@ export async function duplicateBrief(id: number): Promise<BriefRecord> {
   return brief;
 }
 
+/** Archives a brief: out of the default list, read-only, still reachable with everything it holds. */
+export async function archiveBrief(id: number): Promise<BriefRecord> {
+  const { brief } = await api.post(`/api/briefs/${id}/archive`, { schema: briefResponseSchema });
+  return brief;
+}
+
+export async function unarchiveBrief(id: number): Promise<BriefRecord> {
+  const { brief } = await api.post(`/api/briefs/${id}/unarchive`, { schema: briefResponseSchema });
+  return brief;
+}
+
+/** 409 `brief_has_reviews` when candidates are in review or decided: archive instead. */
 export async function deleteBrief(id: number): Promise<void> {
   await api.delete(`/api/briefs/${id}`);
 }
@@ -39,6 +51,8 @@ function useBriefMutation<A>(fn: (arg: A) => Promise<BriefRecord>) {
 export const useCreateBrief = () => useBriefMutation(createBrief);
 export const useUpdateBrief = () => useBriefMutation(updateBrief);
 export const useDuplicateBrief = () => useBriefMutation(duplicateBrief);
+export const useArchiveBrief = () => useBriefMutation(archiveBrief);
+export const useUnarchiveBrief = () => useBriefMutation(unarchiveBrief);
 
 export function useDeleteBrief() {
   const queryClient = useQueryClient();

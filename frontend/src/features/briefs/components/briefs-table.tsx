@@ -17,9 +17,15 @@ export function targetPhrase(spec: BriefRecord['spec']): string {
   return `${sign} ${formatQuantity(spec.targetTempC, '°C')} within ${formatQuantity(spec.reachWithinMin, 'min')}, held ${formatQuantity(spec.holdMin, 'min')}`;
 }
 
-export function BriefsTable({ briefs, canWrite, newAction }: { briefs: BriefRecord[]; canWrite: boolean; newAction?: ReactNode }) {
+export function BriefsTable({ briefs, canWrite, newAction, archived = false }: { briefs: BriefRecord[]; canWrite: boolean; newAction?: ReactNode; archived?: boolean }) {
   const duplicate = useDuplicateBrief();
   const navigate = useNavigate();
+  if (briefs.length === 0 && archived)
+    return (
+      <EmptyState title="No archived briefs">
+        A brief archived from its page shows here, read-only, with its runs, candidates and reviews.
+      </EmptyState>
+    );
   if (briefs.length === 0)
     return (
       <EmptyState title="No briefs yet" action={newAction}>

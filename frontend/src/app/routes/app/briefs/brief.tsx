@@ -11,12 +11,12 @@ import { QueryError } from '@/components/ui/query-error';
 import { Loading } from '@/components/ui/spinner';
 import { getBriefQueryOptions, useBrief } from '@/features/briefs/api/get-brief';
 import { getBriefRunsQueryOptions } from '@/features/briefs/api/get-brief-runs';
-import { useDeleteBrief } from '@/features/briefs/api/save-brief';
+import { useArchiveBrief, useDeleteBrief, useUnarchiveBrief } from '@/features/briefs/api/save-brief';
 import { useStartRun } from '@/features/briefs/api/start-run';
 import { BriefForm } from '@/features/briefs/components/brief-form';
 import { BriefRunsList } from '@/features/briefs/components/brief-runs-list';
 import { BriefSummary } from '@/features/briefs/components/brief-summary';
-import { errorMessage } from '@/lib/api-client';
+import { errorMessage, isApiError } from '@/lib/api-client';
 import { formatDateTime } from '@/lib/format';
 import { hasRole, useSessionUser } from '@/lib/session';
 import { requireUser } from '../../../guards';
@@ -46,7 +46,9 @@ export default function BriefRoute() {
   const canWrite = hasRole(me, ['designer', 'admin']);
   const startRun = useStartRun();
   const remove = useDeleteBrief();
-  const [confirmDelete, setConfirmDelete] = useState(false);
+  const archive = useArchiveBrief();
+  const unarchive = useUnarchiveBrief();
+  const [confirming, setConfirming] = useState<'delete' | 'archive' | null>(null);
 
   const back = (
     <p className="mb-2 text-small">
@@ -71,6 +73,16 @@ export default function BriefRoute() {
     );
 
   const b = brief.data;
+  const isArchived = b.archivedAt !== null;
+  // Candidates in review or decided make the brief a record: the server refuses the delete and says why.
+  const deleteRefused = isApiError(remove.error) && remove.error.code === 'brief_has_reviews';
+  const doArchive = () =>
+    archive.mutate(b.id, {
+      onSuccess: () => {
+        setConfirming(null);
+        remove.reset();
+      },
+    });
   const run = () => startRun.mutate(b.id, { onSuccess: (runId) => void navigate(`/runs/${runId}`) });
 
   return (
@@ -81,6 +93,11 @@ export default function BriefRoute() {
         title={b.name}
         description={
           <>
+            {isArchived && (
+              <>
+                <Badge>Archived</Badge>{' '}
+              </>
+            )}
             Version {b.version} · changed {formatDateTime(b.updatedAt)}
             {b.updatedBy ? ` by ${b.updatedBy}` : ''}
             {b.lastRun && (
@@ -95,7 +112,11 @@ export default function BriefRoute() {
           </>
         }
         action={
-          canWrite ? (
+          canWrite && isArchived ? (
+            <Button variant="secondary" onClick={() => unarchive.mutate(b.id)} pending={unarchive.isPending} pendingLabel="Unarchiving…">
+              Unarchive
+            </Button>
+          ) : canWrite ? (
             <div className="flex flex-wrap gap-2">
               {!editing && (
                 <Button variant="secondary" onClick={() => setEditing(true)}>
@@ -112,6 +133,14 @@ export default function BriefRoute() {
         }
       />
       {startRun.isError && <FormMessage>{errorMessage(startRun.error)}</FormMessage>}
+      {unarchive.isError && <FormMessage>{errorMessage(unarchive.error)}</FormMessage>}
+      {isArchived && (
+        <div role="status" className="mb-gutter rounded-control border border-ink-100 bg-ink-50 px-4 py-3 text-small text-ink-700">
+          Archived {formatDateTime(b.archivedAt!)}
+          {b.archivedBy ? ` by ${b.archivedBy}` : ''}. It is read-only and not in the list of briefs; its runs, candidates, reviews and
+          audit trail are kept as they were. {canWrite ? 'Unarchive it to edit or run it again.' : ''}
+        </div>
+      )}
 
       <div className="flex flex-col gap-gutter">
         <Card>
@@ -142,24 +171,57 @@ export default function BriefRoute() {
           </CardBody>
         </Card>
 
-        {canWrite && !editing && (
-          <div className="flex flex-wrap items-center gap-3">
-            {confirmDelete ? (
-              <>
-                <span className="text-small text-ink-700">Delete “{b.name}” and its runs?</span>
-                <Button variant="danger" size="sm" pending={remove.isPending} onClick={() => remove.mutate(b.id, { onSuccess: () => void navigate('/briefs') })}>
-                  Yes, delete it
-                </Button>
-                <Button variant="ghost" size="sm" onClick={() => setConfirmDelete(false)}>
-                  Keep it
-                </Button>
-              </>
-            ) : (
-              <Button variant="ghost" size="sm" onClick={() => setConfirmDelete(true)}>
-                Delete this brief
-              </Button>
+        {canWrite && !editing && !isArchived && (
+          <div className="flex flex-col gap-3">
+            <div className="flex flex-wrap items-center gap-3">
+              {confirming === 'archive' ? (
+                <>
+                  <span className="text-small text-ink-700">
+                    Archive “{b.name}”? It leaves the list of briefs and becomes read-only (no edits, no new runs). Its runs, candidates, reviews and
+                    audit trail are kept, and it can be unarchived at any time.
+                  </span>
+                  <Button size="sm" pending={archive.isPending} pendingLabel="Archiving…" onClick={doArchive}>
+                    Yes, archive it
+                  </Button>
+                  <Button variant="ghost" size="sm" onClick={() => setConfirming(null)}>
+                    Keep it active
+                  </Button>
+                </>
+              ) : confirming === 'delete' ? (
+                <>
+                  <span className="text-small text-ink-700">
+                    Delete “{b.name}” with its runs and candidates for good? A brief whose candidates went to review cannot be deleted; archive it
+                    instead.
+                  </span>
+                  <Button variant="danger" size="sm" pending={remove.isPending} onClick={() => remove.mutate(b.id, { onSuccess: () => void navigate('/briefs') })}>
+                    Yes, delete it
+                  </Button>
+                  <Button variant="ghost" size="sm" onClick={() => setConfirming(null)}>
+                    Keep it
+                  </Button>
+                </>
+              ) : (
+                <>
+                  <Button variant="secondary" size="sm" onClick={() => setConfirming('archive')}>
+                    Archive this brief
+                  </Button>
+                  <Button variant="ghost" size="sm" onClick={() => setConfirming('delete')}>
+                    Delete this brief
+                  </Button>
+                </>
+              )}
+            </div>
+            {remove.isError && (
+              <div className="flex flex-wrap items-center gap-3">
+                <FormMessage>{errorMessage(remove.error)}</FormMessage>
+                {deleteRefused && confirming !== 'archive' && (
+                  <Button variant="secondary" size="sm" onClick={() => setConfirming('archive')}>
+                    Archive instead
+                  </Button>
+                )}
+              </div>
             )}
-            {remove.isError && <FormMessage>{errorMessage(remove.error)}</FormMessage>}
+            {archive.isError && <FormMessage>{errorMessage(archive.error)}</FormMessage>}
           </div>
         )}
       </div>

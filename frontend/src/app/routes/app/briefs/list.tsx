@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
+import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { ButtonLink } from '@/components/ui/button';
 import { Card, CardBody, CardHeader } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
@@ -18,12 +18,14 @@ export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     await requireUser(queryClient, request);
-    void queryClient.prefetchQuery(getBriefsQueryOptions());
+    const archived = new URL(request.url).searchParams.get('archived') === '1';
+    void queryClient.prefetchQuery(getBriefsQueryOptions({ page: 1, pageSize: 25, ...(archived ? { archived: 'true' as const } : {}) }));
     return null;
   };
 
 export default function BriefsRoute() {
   const me = useSessionUser();
+  const archived = useSearchParams()[0].get('archived') === '1';
   const paging = usePageState(25);
   const { setPage } = paging;
   const [draft, setDraft] = useState('');
@@ -38,7 +40,7 @@ export default function BriefsRoute() {
     }, 300);
     return () => clearTimeout(timer);
   }, [draft, q, setPage]);
-  const briefs = useBriefs({ page: paging.page, pageSize: paging.pageSize, ...(q ? { q } : {}), ...(packType ? { packType } : {}) });
+  const briefs = useBriefs({ page: paging.page, pageSize: paging.pageSize, ...(q ? { q } : {}), ...(packType ? { packType } : {}), ...(archived ? { archived: 'true' as const } : {}) });
   const filtered = Boolean(q || packType);
   const canWrite = hasRole(me, ['designer', 'admin']);
   const newBrief = canWrite ? <ButtonLink to="/briefs/new">New brief</ButtonLink> : undefined;
@@ -51,7 +53,26 @@ export default function BriefsRoute() {
         action={newBrief}
       />
       <Card>
-        <CardHeader title="All briefs" description={briefs.data ? formatCount(briefs.data.total, 'brief') : undefined} />
+        <CardHeader
+          title={archived ? 'Archived briefs' : 'Active briefs'}
+          description={
+            <>
+              {briefs.data ? `${formatCount(briefs.data.total, 'brief')} · ` : ''}
+              {archived ? (
+                <>
+                  Archived briefs are read-only; open one to unarchive it.{' '}
+                  <Link to="/briefs" className="font-semibold text-frost-700 hover:underline">
+                    Back to the active briefs
+                  </Link>
+                </>
+              ) : (
+                <Link to="/briefs?archived=1" className="font-semibold text-frost-700 hover:underline">
+                  Show the archived briefs
+                </Link>
+              )}
+            </>
+          }
+        />
         <CardBody>
           <div className="mb-4 flex flex-wrap items-end gap-3">
             <TextField label="Search by name" type="search" value={draft} onChange={(event) => setDraft(event.target.value)} containerClassName="min-w-64 flex-1" placeholder="e.g. sideline" />
@@ -78,7 +99,7 @@ export default function BriefsRoute() {
               {filtered && briefs.data.total === 0 ? (
                 <p className="text-small text-ink-600">No brief matches; try a shorter search or the other pack type.</p>
               ) : (
-                <BriefsTable briefs={briefs.data.items} canWrite={canWrite} newAction={newBrief} />
+                <BriefsTable briefs={briefs.data.items} canWrite={canWrite} newAction={archived ? undefined : newBrief} archived={archived} />
               )}
               <Pager noun="brief" label="Pages of the briefs" page={paging.page} pageSize={paging.pageSize} total={briefs.data.total} onPageChange={paging.setPage} pageSizes={[25, 50, 100]} onPageSizeChange={paging.setPageSize} />
             </div>
