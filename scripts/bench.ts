@@ -9,6 +9,9 @@
 //       (autocannon), against a throwaway PostgreSQL and server started here and removed after;
 //   (e) a small run on a fresh optimisation thread (as each run once started) against the
 //       process's long-lived thread;
+//   (f) GET /api/ingredients under 50 connections (autocannon) against a server in its own process,
+//       beside the health route measured the same way in the same run, and their ratio
+//       (scripts/bench/list-load.ts);
 // then the memory of this process (RSS, heap).
 import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -19,6 +22,7 @@ import { DEMO_BRIEFS, DEMO_LIBRARY } from '../shared/src/optimiser/demo-library'
 import { briefSchema } from '../shared/src/schemas/briefs';
 import { optimiseOnThread, stopOptimiseThread } from '../backend/src/runs/optimise-pool';
 import { runOptimiserBench } from './bench/optimiser';
+import { measureListLoad, startBenchServer } from './bench/list-load';
 import { bin, freePort, root, runStep } from './lib/env';
 import { ensureDatabase, startPostgres, type LocalPostgres } from './lib/postgres';
 
@@ -126,6 +130,24 @@ try {
   }
   rmSync(scratch, { recursive: true, force: true });
   if (pg && !pg.dataDir.startsWith(scratch)) rmSync(pg.dataDir, { recursive: true, force: true });
+}
+
+// --- (f): a list endpoint under load, against the health route --------------------------------
+console.log('[bench] GET /api/ingredients and GET /api/health at 50 connections: throwaway PostgreSQL and server process ...');
+{
+  const loadServer = await startBenchServer();
+  try {
+    const load = await measureListLoad(loadServer.url, loadServer.token, { connections: 50, seconds: 10 });
+    section(`(f) at ${load.ingredients.connections} connections for 10 s each (autocannon; the server in its own process)`);
+    row(`GET /api/ingredients (${load.rows} rows, ${(load.bytes / 1024).toFixed(0)} KiB): requests per second`, load.ingredients.requestsPerSecond.toFixed(0));
+    row('GET /api/ingredients: latency p50 / p99', `${load.ingredients.p50Ms} ms / ${load.ingredients.p99Ms} ms`);
+    row('GET /api/health (SELECT 1): requests per second', load.health.requestsPerSecond.toFixed(0));
+    row('GET /api/health: latency p50 / p99', `${load.health.p50Ms} ms / ${load.health.p99Ms} ms`);
+    row('ratio ingredients / health (requests per second)', load.ratio.toFixed(2));
+    row('non-2xx answers / errors', `${load.ingredients.non2xx + load.health.non2xx} / ${load.ingredients.errors + load.health.errors}`);
+  } finally {
+    await loadServer.stop();
+  }
 }
 
 // --- (e): optimisation thread ----------------------------------------------------------------
