@@ -137,13 +137,15 @@ console.log('[bench] GET /api/ingredients and GET /api/health at 50 connections:
 {
   const loadServer = await startBenchServer();
   try {
-    const load = await measureListLoad(loadServer.url, loadServer.token, { connections: 50, seconds: 10 });
+    const load = await measureListLoad(loadServer.url, loadServer.token, { connections: 50, seconds: 10, serverPid: loadServer.pid });
     section(`(f) at ${load.ingredients.connections} connections for 10 s each (autocannon; the server in its own process)`);
     row(`GET /api/ingredients (${load.rows} rows, ${(load.bytes / 1024).toFixed(0)} KiB): requests per second`, load.ingredients.requestsPerSecond.toFixed(0));
     row('GET /api/ingredients: latency p50 / p99', `${load.ingredients.p50Ms} ms / ${load.ingredients.p99Ms} ms`);
     row('GET /api/health (SELECT 1): requests per second', load.health.requestsPerSecond.toFixed(0));
     row('GET /api/health: latency p50 / p99', `${load.health.p50Ms} ms / ${load.health.p99Ms} ms`);
     row('ratio ingredients / health (requests per second)', load.ratio.toFixed(2));
+    const cpu = (x: number | null) => (x === null ? 'n/a' : `${x.toFixed(2)} ms`);
+    row('server CPU per request: ingredients / health', `${cpu(load.ingredients.serverCpuMsPerRequest)} / ${cpu(load.health.serverCpuMsPerRequest)}`);
     row('non-2xx answers / errors', `${load.ingredients.non2xx + load.health.non2xx} / ${load.ingredients.errors + load.health.errors}`);
   } finally {
     await loadServer.stop();
