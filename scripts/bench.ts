@@ -12,6 +12,9 @@
 //   (f) the full run on libraries of 30, 100 and 300 actives (grades of the demo actives), the
 //       300/30 time ratio;
 //   (g) the gzipped JavaScript the sign-in page and the home page load (scripts/bench/bundle.ts);
+//   (h) GET /api/ingredients under 50 connections (autocannon) against a server in its own process,
+//       beside the health route measured the same way in the same run, and their ratio
+//       (scripts/bench/list-load.ts);
 // then the memory of this process (RSS, heap).
 import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -24,6 +27,7 @@ import { optimiseOnThread, stopOptimiseThread } from '../backend/src/runs/optimi
 import { runLibraryScaleBench } from './bench/library-scale';
 import { runOptimiserBench } from './bench/optimiser';
 import { measureFirstScreens } from './bench/bundle';
+import { measureListLoad, startBenchServer } from './bench/list-load';
 import { bin, buildFrontendIfStale, freePort, root, runStep } from './lib/env';
 import { ensureDatabase, startPostgres, type LocalPostgres } from './lib/postgres';
 
@@ -141,6 +145,26 @@ try {
   }
   rmSync(scratch, { recursive: true, force: true });
   if (pg && !pg.dataDir.startsWith(scratch)) rmSync(pg.dataDir, { recursive: true, force: true });
+}
+
+// --- (h): a list endpoint under load, against the health route --------------------------------
+console.log('[bench] GET /api/ingredients and GET /api/health at 50 connections: throwaway PostgreSQL and server process ...');
+{
+  const loadServer = await startBenchServer();
+  try {
+    const load = await measureListLoad(loadServer.url, loadServer.token, { connections: 50, seconds: 10, serverPid: loadServer.pid });
+    section(`(h) at ${load.ingredients.connections} connections for 10 s each (autocannon; the server in its own process)`);
+    row(`GET /api/ingredients (${load.rows} rows, ${(load.bytes / 1024).toFixed(0)} KiB): requests per second`, load.ingredients.requestsPerSecond.toFixed(0));
+    row('GET /api/ingredients: latency p50 / p99', `${load.ingredients.p50Ms} ms / ${load.ingredients.p99Ms} ms`);
+    row('GET /api/health (SELECT 1): requests per second', load.health.requestsPerSecond.toFixed(0));
+    row('GET /api/health: latency p50 / p99', `${load.health.p50Ms} ms / ${load.health.p99Ms} ms`);
+    row('ratio ingredients / health (requests per second)', load.ratio.toFixed(2));
+    const cpu = (x: number | null) => (x === null ? 'n/a' : `${x.toFixed(2)} ms`);
+    row('server CPU per request: ingredients / health', `${cpu(load.ingredients.serverCpuMsPerRequest)} / ${cpu(load.health.serverCpuMsPerRequest)}`);
+    row('non-2xx answers / errors', `${load.ingredients.non2xx + load.health.non2xx} / ${load.ingredients.errors + load.health.errors}`);
+  } finally {
+    await loadServer.stop();
+  }
 }
 
 // --- (e): optimisation thread ----------------------------------------------------------------

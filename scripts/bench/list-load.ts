@@ -7,7 +7,7 @@
 // .bench-profiles/ when it stops), measures and removes everything. `npm run bench` calls
 // {@link measureListLoad} against a server it starts the same way.
 import { spawn, type ChildProcess } from 'node:child_process';
-import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
+import { chmodSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import os from 'node:os';
 import path from 'node:path';
@@ -32,13 +32,31 @@ export interface LoadFigure {
   p99Ms: number;
   non2xx: number;
   errors: number;
+  /** The server process's CPU time (user + system) per answered request; null where /proc is missing. */
+  serverCpuMsPerRequest: number | null;
 }
 
-async function load(url: string, token: string, route: string, connections: number, seconds: number): Promise<LoadFigure> {
+/** CPU seconds (user + system) the process has used so far, from /proc (Linux); null elsewhere. */
+function cpuSeconds(pid: number | undefined): number | null {
+  if (!pid) return null;
+  try {
+    const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').replace(/^.*\) /, '').split(' ');
+    // After the command name: field 14 utime and 15 stime of proc(5), in clock ticks (USER_HZ, 100 on Linux).
+    return (Number(fields[11]) + Number(fields[12])) / 100;
+  } catch {
+    return null;
+  }
+}
+
+async function load(url: string, token: string, route: string, connections: number, seconds: number, serverPid?: number): Promise<LoadFigure> {
   const headers = { authorization: `Bearer ${token}` };
   await autocannon({ url: `${url}${route}`, headers, connections, duration: 2 }); // warm-up: JIT, pools
+  await new Promise((resolve) => setTimeout(resolve, 500)); // let the warm-up's queue drain
+  const cpuBefore = cpuSeconds(serverPid);
   const r = await autocannon({ url: `${url}${route}`, headers, connections, duration: seconds });
+  const cpuAfter = cpuSeconds(serverPid);
   return {
+    serverCpuMsPerRequest: cpuBefore !== null && cpuAfter !== null && r.requests.total > 0 ? ((cpuAfter - cpuBefore) * 1000) / r.requests.total : null,
     path: route,
     connections,
     requests: r.requests.total,
@@ -51,21 +69,22 @@ async function load(url: string, token: string, route: string, connections: numb
 }
 
 /** The health route and the ingredient list at `connections`, one after the other, `seconds` each. */
-export async function measureListLoad(url: string, token: string, options: { connections?: number; seconds?: number } = {}) {
+export async function measureListLoad(url: string, token: string, options: { connections?: number; seconds?: number; serverPid?: number } = {}) {
   const connections = options.connections ?? 50;
   const seconds = options.seconds ?? 10;
   const check = await fetch(`${url}/api/ingredients`, { headers: { authorization: `Bearer ${token}` } });
   if (!check.ok) throw new Error(`GET /api/ingredients answered ${check.status}: ${await check.text()}`);
   const body = (await check.json()) as { total: number };
   const bytes = Number(check.headers.get('content-length') ?? 0);
-  const health = await load(url, token, '/api/health', connections, seconds);
-  const ingredients = await load(url, token, '/api/ingredients', connections, seconds);
+  const health = await load(url, token, '/api/health', connections, seconds, options.serverPid);
+  const ingredients = await load(url, token, '/api/ingredients', connections, seconds, options.serverPid);
   return { health, ingredients, rows: body.total, bytes, ratio: ingredients.requestsPerSecond / health.requestsPerSecond };
 }
 
 export interface BenchServer {
   url: string;
   token: string;
+  pid: number | undefined;
   stop(): Promise<void>;
 }
 
@@ -117,7 +136,7 @@ export async function startBenchServer(options: { nodeArgs?: string[] } = {}): P
     const login = await fetch(`${url}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'designer@demo.test', password: 'packwright-demo' }) });
     if (!login.ok) throw new Error(`sign-in failed: ${login.status} ${await login.text()}`);
     const { token } = (await login.json()) as { token: string };
-    return { url, token, stop: cleanup };
+    return { url, token, pid: child.pid, stop: cleanup };
   } catch (error) {
     await cleanup();
     throw error;
@@ -129,9 +148,9 @@ if (isMain) {
   const profile = process.argv.includes('--cpu-prof');
   const server = await startBenchServer({ nodeArgs: profile ? ['--cpu-prof', `--cpu-prof-dir=${path.join(root, '.bench-profiles')}`] : [] });
   try {
-    const r = await measureListLoad(server.url, server.token);
+    const r = await measureListLoad(server.url, server.token, { serverPid: server.pid });
     for (const f of [r.health, r.ingredients]) {
-      console.log(`${f.path.padEnd(18)} ${f.connections} connections: ${f.requestsPerSecond.toFixed(0)} req/s, p50 ${f.p50Ms} ms, p99 ${f.p99Ms} ms, non-2xx ${f.non2xx}, errors ${f.errors}`);
+      console.log(`${f.path.padEnd(18)} ${f.connections} connections: ${f.requestsPerSecond.toFixed(0)} req/s, p50 ${f.p50Ms} ms, p99 ${f.p99Ms} ms, non-2xx ${f.non2xx}, errors ${f.errors}, server CPU ${f.serverCpuMsPerRequest?.toFixed(2) ?? '?'} ms/request`);
     }
     console.log(`ingredients: ${r.rows} rows, ${r.bytes} bytes; ratio ingredients / health = ${r.ratio.toFixed(2)}`);
   } finally {

@@ -1,3 +1,4 @@
+import { createSecretKey } from 'node:crypto';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
@@ -8,7 +9,9 @@ import { config } from '../config';
 import { UserRecord } from '../users/user.model';
 import { Workspace } from '../workspaces/workspace.model';
 import { DUMMY_PASSWORD_HASH, verifyPassword } from './passwords';
-import { toAuthUser } from './session-user';
+import { QueryTypes } from 'sequelize';
+import { sequelize } from '../db/sequelize';
+import { toAuthUser, type AuthUser } from './session-user';
 
 export const SESSION_COOKIE = 'pw_session';
 
@@ -50,6 +53,41 @@ async function findActiveUser(where: { id?: number; email?: string }) {
   return UserRecord.findOne({ where, include: [{ model: Workspace, as: 'workspace' }] });
 }
 
+interface SessionUserRow {
+  id: number;
+  email: string;
+  name: string;
+  role: AuthUser['role'];
+  disabled: boolean;
+  token_version: number;
+  workspace_id: number;
+  workspace_name: string;
+  workspace_currency: string;
+}
+
+/**
+ * The member a session token names, with their workspace, in one plain query: every signed-in
+ * request asks this, and building Sequelize instances with an include cost more than the query.
+ */
+async function findSessionUser(id: number) {
+  if (!Number.isSafeInteger(id) || id <= 0) return null;
+  const [row] = await sequelize.query<SessionUserRow>(
+    `SELECT u.id, u.email, u.name, u.role, u.disabled, u.token_version, u.workspace_id, w.name AS workspace_name, w.currency AS workspace_currency
+       FROM users u JOIN workspaces w ON w.id = u.workspace_id WHERE u.id = :id`,
+    { replacements: { id }, type: QueryTypes.SELECT },
+  );
+  if (!row) return null;
+  const authUser: AuthUser = {
+    id: row.id,
+    email: row.email,
+    name: row.name,
+    role: row.role,
+    workspaceId: row.workspace_id,
+    workspace: { id: row.workspace_id, name: row.workspace_name, currency: row.workspace_currency },
+  };
+  return { authUser, disabled: row.disabled, tokenVersion: row.token_version, workspaceId: row.workspace_id };
+}
+
 passport.use(
   new LocalStrategy({ usernameField: 'email', passwordField: 'password', session: false }, async (email, password, done) => {
     try {
@@ -68,7 +106,9 @@ passport.use(
   new JwtStrategy(
     {
       jwtFromRequest: ExtractJwt.fromExtractors([ExtractJwt.fromAuthHeaderAsBearerToken(), cookieExtractor]),
-      secretOrKey: config.jwtSecret,
+      // A KeyObject made once: given the secret as a string, jsonwebtoken first tries it as a public
+      // key (createPublicKey throws) and then builds a secret key, on every request.
+      secretOrKey: createSecretKey(Buffer.from(config.jwtSecret, 'utf8')) as unknown as string,
       algorithms: ['HS256'],
       issuer: 'packwright',
     },
@@ -77,11 +117,11 @@ passport.use(
         const parsed = sessionPayloadSchema.safeParse(raw);
         if (!parsed.success) return done(null, false);
         const payload = parsed.data;
-        const user = await findActiveUser({ id: Number(payload.sub) });
+        const user = await findSessionUser(Number(payload.sub));
         if (!user || user.disabled || user.tokenVersion !== payload.tv || user.workspaceId !== payload.ws) {
           return done(null, false);
         }
-        return done(null, toAuthUser(user));
+        return done(null, user.authUser);
       } catch (error) {
         return done(error);
       }
