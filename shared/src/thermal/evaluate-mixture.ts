@@ -51,7 +51,7 @@ export function evaluateMixture(port: ChemistryPort, input: ResolvedMixture): Ev
     ...(m.targetTempC !== undefined ? { targetTempC: m.targetTempC } : {}),
     ...(m.targetBand ? { targetBand: m.targetBand } : {}),
   });
-  const end = solveModelEndState(model, m.initialTempC, 0);
+  const end = solveModelEndState(model, m.initialTempC, 0, { outOfRange: 'limit' });
 
   let dissolvingMass = 0;
   let dissolvedMass = 0;
