@@ -188,7 +188,8 @@ export function evaluate(input: EvaluationInput): Evaluation {
     figures,
     exchange: { uaWPerK, envTempC: ex.envTempC, areaM2: ex.areaM2 },
     massG,
-    endState: o.endState ? solveModelEndState(model, c.initialTempC, 0) : null,
+    // Outside −80…400 °C the end state is reported at the limit with a warning that says so (thermal/end-state.ts).
+    endState: o.endState ? solveModelEndState(model, c.initialTempC, 0, { outOfRange: 'limit' }) : null,
     port,
   };
 }

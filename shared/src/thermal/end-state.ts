@@ -1,6 +1,7 @@
 import type { ComputationWarning } from '../chemistry/types';
 import type { ChemistryPort } from './chemistry-port';
 import { energyBreakdown, type EnergyBreakdown } from './energy';
+import { WATER_BOILING_POINT_C } from './constants';
 import { ThermalModelError } from './errors';
 import { PackModel, type MassInventory, type ThermalComponent } from './pack-model';
 import { brentRoot } from './root';
@@ -28,6 +29,8 @@ export interface EndStateResult {
   endTempC: number;
   solutes: SoluteEndState[];
   iceG: number;
+  /** Water boiled off as steam that left the pack, g (a scald hazard; hazard input). */
+  steamLostG: number;
   /** True when the end state sits on a plateau where two phases coexist (eutectic, 0 °C, melting point). */
   onPlateau: boolean;
   energy: EnergyBreakdown;
@@ -74,7 +77,13 @@ export function solveEndState(port: ChemistryPort, input: EndStateInput): EndSta
 }
 
 /** The end state of an already built PackModel (used by the time profile to compare). */
-export function solveModelEndState(model: PackModel, t0: number, heatLostJ: number): EndStateResult {
+/**
+ * `outOfRange`: what to do when the balance does not close within −80…400 °C — `throw` a
+ * ThermalModelError (default), or `limit`: report the limit with the warning
+ * `thermal.end-state-out-of-range` (for callers whose response must carry a number; the
+ * warning must then be shown beside it).
+ */
+export function solveModelEndState(model: PackModel, t0: number, heatLostJ: number, options: { outOfRange?: 'throw' | 'limit' } = {}): EndStateResult {
   const x0 = model.initialExtents();
   const target = model.enthalpyJ(t0, x0) - heatLostJ;
   const g = (t: number) => model.enthalpyJ(t, model.equilibriumExtents(t)) - target;
@@ -125,6 +134,12 @@ export function solveModelEndState(model: PackModel, t0: number, heatLostJ: numb
     tempC = t0;
     x = model.equilibriumExtents(t0);
   } else if (clamped) {
+    if ((options.outOfRange ?? 'throw') === 'throw') {
+      throw new ThermalModelError(
+        `the pack's enthalpy balance does not close between ${END_STATE_MIN_TEMP_C} and ${END_STATE_MAX_TEMP_C} °C, the range where the model's data hold: its end state would lie ${clamped === 'low' ? 'below' : 'above'} it (for a warmer: more heat than the pack can hold without losses; give the heat exchanged or a contact case)`,
+        { field: 'components' },
+      );
+    }
     tempC = clamped === 'low' ? END_STATE_MIN_TEMP_C : END_STATE_MAX_TEMP_C;
     x = model.equilibriumExtents(tempC);
     model.warnings.add({
@@ -147,12 +162,6 @@ export function solveModelEndState(model: PackModel, t0: number, heatLostJ: numb
       onPlateau = Math.min(Math.abs(root.fLo), Math.abs(root.fHi)) > 1e-6 * scale;
     }
   }
-  if (tempC > 100) {
-    model.warnings.add({
-      code: 'thermal.above-boiling',
-      message: `the end temperature ${tempC.toFixed(0)} °C is above the boiling point of water; boiling and steam loss are not modelled`,
-    });
-  }
   return describeEndState(model, t0, x0, tempC, x, heatLostJ, onPlateau);
 }
 
@@ -166,6 +175,8 @@ export function describeEndState(
   onPlateau: boolean,
 ): EndStateResult {
   const ice = model.iceG(x);
+  const steam = model.steamLostG(x);
+  noteBoiling(model, steam, tempC);
   const solutes: SoluteEndState[] = model.solutes.map((s, j) => {
     const fraction = model.dissolvedFraction(j, x);
     const limitedBy: DissolutionLimit = fraction >= 1 - 1e-9 ? 'none' : ice > 1e-9 ? 'ice' : 'solubility';
@@ -175,6 +186,7 @@ export function describeEndState(
     endTempC: tempC,
     solutes,
     iceG: ice,
+    steamLostG: steam,
     onPlateau,
     energy: energyBreakdown(model, { tempC: t0, x: x0 }, { tempC, x }, heatLostJ),
     massInventory: model.massInventory(x),
@@ -182,4 +194,20 @@ export function describeEndState(
     warnings: model.warnings.list(),
     extents: x,
   };
+}
+
+/** Warnings for steam lost and for a dry pack above the boiling point (shared with the time profile). */
+export function noteBoiling(model: PackModel, steamLostG: number, maxTempC: number): void {
+  if (steamLostG > 0.01) {
+    model.warnings.add({
+      code: 'thermal.steam-lost',
+      message: `water boils at ${WATER_BOILING_POINT_C} °C (1 atm): ${steamLostG.toFixed(1)} g leaves the pack as steam — a scald hazard; the pouch must vent it (follow the SDS, local codes and licensed practice)`,
+    });
+  }
+  if (maxTempC > WATER_BOILING_POINT_C + 1) {
+    model.warnings.add({
+      code: 'thermal.above-boiling',
+      message: `the pack reaches ${maxTempC.toFixed(0)} °C with no liquid water left (boiled off or consumed): a burn and fire hazard`,
+    });
+  }
 }

@@ -8,7 +8,7 @@ import { InertParts, type InertModel } from './processes/inert';
 import { ReactionProcesses, type ReactionModel } from './processes/reaction';
 import { WaterPhases } from './processes/water-phases';
 import type { ChemistryPort } from './chemistry-port';
-import { REFERENCE_TEMP_C } from './constants';
+import { REFERENCE_TEMP_C, WATER_BOILING_POINT_C } from './constants';
 import { setUpReactions } from './reaction-partners';
 
 export { WarningCollector } from './processes/common';
@@ -223,9 +223,14 @@ export class PackModel {
     return new Array<number>(this.size).fill(0);
   }
 
-  /** Liquid water, g: charged water + hydrate water released − water consumed by reactions − water frozen (charged ice melted counts negative). */
+  /** Liquid water, g: charged water + hydrate water released − water consumed by reactions − water frozen (charged ice melted counts negative) − steam boiled off. */
   liquidWaterG(x: readonly number[]): number {
-    return this.waterBaseG + this.dissolution.waterReleasedG(x) - this.reaction.waterConsumedG(x) - this.water.frozenG(x);
+    return this.waterBaseG + this.dissolution.waterReleasedG(x) - this.reaction.waterConsumedG(x) - this.water.frozenG(x) - this.water.steamLostG(x);
+  }
+
+  /** Steam boiled off and gone from the pack at extents x, g. */
+  steamLostG(x: readonly number[]): number {
+    return this.water.steamLostG(x);
   }
 
   /** Fraction of solute j's charged solid in solution at extents x. */
@@ -298,7 +303,7 @@ export class PackModel {
    * Equilibrium extents at `tempC` (end state): reactions complete (limited by water),
    * melts crystallised below their melting point, metals fully oxidised, solutes dissolved up
    * to solubility at `tempC`, and ice where the solution would freeze; below the eutectic
-   * no liquid remains.
+   * no liquid remains; above the boiling point the liquid water has left as steam.
    */
   equilibriumExtents(tempC: number): number[] {
     const x = this.initialExtents();
@@ -307,6 +312,11 @@ export class PackModel {
     this.melt.equilibrium(tempC, x);
     this.hydrateMelt.equilibrium(tempC, x);
     this.oxidation.equilibrium(x);
+    // Above the boiling point (1 atm) the liquid water has boiled off and left as steam.
+    if (tempC > WATER_BOILING_POINT_C) {
+      this.water.boilAll(x, water);
+      return x;
+    }
     // No liquid water left (all consumed by reactions): nothing dissolves, nothing freezes.
     if (water <= 0) return x;
     this.dissolution.equilibriumNoIce(tempC, x, water);
@@ -321,7 +331,7 @@ export class PackModel {
     this.reaction.rates(x, liquid, out);
     this.melt.rates(tempC, x, out);
     this.oxidation.rates(x, out);
-    this.water.rates(tempC, x, liquid, out);
+    this.water.rates(tempC, x, liquid, out, () => this.evaluate(x).cJPerK);
     this.hydrateMelt.rates(tempC, x, out);
   }
 }

@@ -111,7 +111,7 @@ export const airOxidationProcessSchema = z.object({
   /** Heat per mol O2, kJ (negative: released); default from the species data by Hess's law. */
   dH_kJ_per_mol_O2: z.number().negative().optional(),
   filmO2Permeance_mol_per_m2_s_Pa: positive('filmO2Permeance_mol_per_m2_s_Pa').default(DEFAULT_O2_PERMEANCE_MOL_PER_M2_S_PA),
-  /** Film area through which O2 enters, m²; default the pack's surface area. */
+  /** Breathable film area through which O2 enters, m²; default one face of the pouch (half the pack's surface). */
   filmAreaM2: positive('filmAreaM2').optional(),
   /** O2 partial pressure outside minus inside, Pa; default 0.2095 × 101325 Pa with no O2 left inside. */
   o2PressureDifferencePa: positive('o2PressureDifferencePa').optional(),

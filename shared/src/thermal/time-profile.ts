@@ -4,7 +4,7 @@ import { energyBreakdown, type EnergyBreakdown } from './energy';
 import { ThermalModelError } from './errors';
 import { PackModel, type ThermalComponent } from './pack-model';
 import { hermiteAt, integrateDormandPrince, type OdeSolution } from './rk45';
-import type { DissolutionLimit } from './end-state';
+import { END_STATE_MAX_TEMP_C, END_STATE_MIN_TEMP_C, noteBoiling, type DissolutionLimit } from './end-state';
 
 export interface TargetBand {
   minC: number;
@@ -83,6 +83,8 @@ export interface TimeProfileResult {
   minutesInBand: number | null;
   solutes: SoluteProgress[];
   iceG: number;
+  /** Water boiled off as steam that left the pack, g (a scald hazard; hazard input). */
+  steamLostG: number;
   /**
    * Energy audit between start and end: heat released by the processes = heat stored in the
    * pack + heat lost to the surroundings (lost integrated along the curve, the rest from the
@@ -201,6 +203,18 @@ export function simulateModel(model: PackModel, input: Omit<TimeProfileInput, 'c
       message: `the time profile stopped at ${(sol.t.at(-1)! / 60).toFixed(1)} min of ${input.holdMin} min (step limit reached)`,
     });
   }
+  // The curve must stay where the data hold (the end-state range): stop with a message, never draw beyond it.
+  for (let k = 0; k < sol.y.length; k++) {
+    const T = sol.y[k]![0]!;
+    if (!(T >= END_STATE_MIN_TEMP_C && T <= END_STATE_MAX_TEMP_C)) {
+      throw new ThermalModelError(
+        `the pack's temperature leaves the range where the model's data hold (${END_STATE_MIN_TEMP_C} to ${END_STATE_MAX_TEMP_C} °C) after ${(sol.t[k]! / 60).toFixed(1)} min (${Number.isFinite(T) ? T.toFixed(0) : String(T)} °C)${
+          T > END_STATE_MAX_TEMP_C ? ', with no liquid water left to boil: the mixture runs away (less reactive metal or more water, and a contact case that removes the heat)' : ''
+        }`,
+        { field: 'components' },
+      );
+    }
+  }
   const last = sol.y.at(-1)!;
   const endT = last[0]!;
   const xEnd = last.slice(1, n + 1);
@@ -213,6 +227,8 @@ export function simulateModel(model: PackModel, input: Omit<TimeProfileInput, 'c
   const stats = analyseCurve(sol, input);
   const loadStats = load ? analyseCurve(sol, input, n + 2, load.initialTempC) : null;
   const ice = model.iceG(xEnd);
+  const steam = model.steamLostG(xEnd);
+  noteBoiling(model, steam, stats.maxC);
   const solutes: SoluteProgress[] = model.solutes.map((s, j) => {
     const fraction = model.dissolvedFraction(j, xEnd);
     const limitedBy: DissolutionLimit = fraction >= 1 - 1e-6 ? 'none' : ice > 1e-6 ? 'ice' : 'solubility';
@@ -227,6 +243,7 @@ export function simulateModel(model: PackModel, input: Omit<TimeProfileInput, 'c
     minutesInBand: stats.minutesInBand,
     solutes,
     iceG: ice,
+    steamLostG: steam,
     energy,
     warnings: model.warnings.list(),
     stats: { steps: sol.t.length - 1, rhsEvaluations: sol.rhsEvaluations, rejectedSteps: sol.rejectedSteps },

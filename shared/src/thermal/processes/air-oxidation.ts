@@ -7,6 +7,11 @@ import type { HeatCapacityParts, MassInventory, ModelContext, ProcessRef } from 
  * Air oxidation of a metal powder (DESIGN.md §4.2), by default 4Fe + 3O2 → 2Fe2O3: one extent
  * per metal, the mol of O2 taken up. ΔH per mol O2 from the stored value or Hess's law; O2
  * supply = film permeance × film area × O2 partial-pressure difference, capped by the metal.
+ *
+ * Three separate inputs: the film's O2 permeance and its area (the process), and the pouch's
+ * size (the contact case, which sets the heat loss). Without a film area the breathable film
+ * is taken as one face of the pouch (half its surface; assumption, with a warning) — not the
+ * whole surface on both faces.
  */
 
 export interface OxidationModel {
@@ -60,7 +65,17 @@ export class OxidationProcesses {
     }
     const cpMetal = port.heatCapacity_J_per_mol_K(process.metalKey) ?? metalM * FALLBACK_SOLID_CP_J_PER_GK;
     const cpOxide = port.heatCapacity_J_per_mol_K(process.oxideKey) ?? oxideM * FALLBACK_SOLID_CP_J_PER_GK;
-    const area = process.filmAreaM2 ?? packAreaM2;
+    let area = process.filmAreaM2;
+    if (area === undefined && packAreaM2 !== undefined) {
+      area = packAreaM2 / 2;
+      this.ctx.warnings.add(
+        {
+          code: 'thermal.film-area-assumed',
+          message: `${label}: no film area given; the breathable film is taken as one face of the pouch (${(area * 1e4).toFixed(0)} cm²). Give filmAreaM2 for a patch or a pouch breathing on both faces`,
+        },
+        label,
+      );
+    }
     const dp = process.o2PressureDifferencePa ?? AIR_O2_MOLE_FRACTION * STANDARD_ATMOSPHERE_PA;
     this.oxidations.push({
       label,

@@ -1,4 +1,13 @@
-import { ICE_CP_J_PER_GK, ICE_FUSION_J_PER_G, ICE_RATE_PER_MIN, REFERENCE_TEMP_C, WATER_CP_J_PER_GK } from '../constants';
+import {
+  BOILING_TIME_CONSTANT_S,
+  ICE_CP_J_PER_GK,
+  ICE_FUSION_J_PER_G,
+  ICE_RATE_PER_MIN,
+  REFERENCE_TEMP_C,
+  WATER_BOILING_POINT_C,
+  WATER_CP_J_PER_GK,
+  WATER_VAPORISATION_J_PER_G,
+} from '../constants';
 import { brentRoot } from '../root';
 import type { HeatCapacityParts, MassInventory, ProcessRef } from './common';
 import type { DissolutionProcesses } from './dissolution';
@@ -10,14 +19,22 @@ import type { DissolutionProcesses } from './dissolution';
  * CRC, constants.ts); ice forms where the solution's freezing point (dissolution module) lies
  * above T and melts where it lies below, so ice with a salt melts down towards the eutectic
  * (a freezing mixture).
+ *
+ * Boiling: a second extent, the steam that has left the pack (g). At 1 atm liquid water boils
+ * at T_b = 100 °C (constants.ts); the steam leaves carrying its enthalpy relative to liquid at
+ * 25 °C, L₂₅ = L_vap(100 °C) + c_water·(100 − 25) K (2256.4 J/g, IAPWS-95), and its liquid's heat
+ * capacity leaves with it. Above T_b the steam is boiled off at C·(T − T_b)/(τ·L_vap), so the
+ * temperature is held at the boiling point while liquid water is left.
  */
 
 const L_ICE_REF_J_PER_G = ICE_FUSION_J_PER_G + (WATER_CP_J_PER_GK - ICE_CP_J_PER_GK) * (REFERENCE_TEMP_C - 0);
-const ICE_SMOOTHING_K = 0.2;
+const L_STEAM_REF_J_PER_G = WATER_VAPORISATION_J_PER_G + WATER_CP_J_PER_GK * (WATER_BOILING_POINT_C - REFERENCE_TEMP_C);
+/** Liquid water, g, below which boiling slows to a stop (smooth switch). Assumption. */
+const BOIL_WATER_SCALE_G = 0.01;
 
 export class WaterPhases {
   offset = 0;
-  readonly size = 1;
+  readonly size = 2;
   /** Ice charged into the pack, g. */
   chargedIceG = 0;
 
@@ -29,11 +46,25 @@ export class WaterPhases {
   }
 
   refs(): ProcessRef[] {
-    return [{ label: 'water', kind: 'freezing' }];
+    return [
+      { label: 'water', kind: 'freezing' },
+      { label: 'water', kind: 'boiling' },
+    ];
   }
 
   scales(waterBaseG: number): number[] {
-    return [Math.max(waterBaseG + this.chargedIceG, 1e-3)];
+    const w = Math.max(waterBaseG + this.chargedIceG, 1e-3);
+    return [w, w];
+  }
+
+  /** Steam boiled off and gone, g. */
+  steamLostG(x: readonly number[]): number {
+    return x[this.offset + 1]!;
+  }
+
+  /** At equilibrium above the boiling point every gram of liquid water has boiled off. */
+  boilAll(x: number[], liquidG: number): void {
+    x[this.offset + 1] = Math.max(0, liquidG);
   }
 
   /** Net water frozen since charging, g (negative: charged ice melted). */
@@ -48,13 +79,18 @@ export class WaterPhases {
 
   evaluate(x: readonly number[], parts: HeatCapacityParts, chemOut?: number[]): number {
     const h = -x[this.offset]! * L_ICE_REF_J_PER_G;
-    if (chemOut) chemOut[this.offset] = h;
+    const hSteam = this.steamLostG(x) * L_STEAM_REF_J_PER_G;
+    if (chemOut) {
+      chemOut[this.offset] = h;
+      chemOut[this.offset + 1] = hSteam;
+    }
     parts.ice += this.iceG(x) * ICE_CP_J_PER_GK;
-    return h;
+    return h + hSteam;
   }
 
   mass(x: readonly number[], inv: MassInventory): void {
     inv.iceG += this.iceG(x);
+    inv.steamLostG += this.steamLostG(x);
   }
 
   /** Before the equilibrium search: all charged ice taken as melted (the search refreezes what it must). */
@@ -95,28 +131,44 @@ export class WaterPhases {
     x[this.offset] = Math.max(0, allWater - wl) - this.chargedIceG;
   }
 
-  /** Ice relaxes to the ice mass at which the current solution freezes at T. */
-  rates(tempC: number, x: readonly number[], liquidG: number, out: number[]): void {
+  /**
+   * Ice relaxes to the ice mass at which the current solution freezes at T; above the boiling
+   * point liquid water boils off (`heatCapacityJPerK` = the pack's C(x), needed only then).
+   */
+  rates(tempC: number, x: readonly number[], liquidG: number, out: number[], heatCapacityJPerK: () => number): void {
+    const over = tempC - WATER_BOILING_POINT_C;
+    const wet = Math.max(0, liquidG) / (Math.max(0, liquidG) + BOIL_WATER_SCALE_G);
+    out[this.offset + 1] = over > 0 && wet > 0 ? (heatCapacityJPerK() * over * wet) / (BOILING_TIME_CONSTANT_S * WATER_VAPORISATION_J_PER_G) : 0;
     const d = this.dissolution;
     const ice = this.iceG(x);
     const allWater = liquidG + ice;
     let iceEq = 0;
+    const xs = d.dissolvedMols(x);
+    const dissolved = xs.reduce((a, b) => a + b, 0);
+    if (dissolved <= 1e-12) {
+      // Pure water: ice and water coexist at 0 °C. The heat that would move T off 0 °C goes into
+      // melting or freezing with time constant τ (as boiling), at most k·(ice or liquid): no stiff
+      // relaxation towards an equilibrium that jumps at 0 °C.
+      const k = ICE_RATE_PER_MIN / 60;
+      let r = 0;
+      if (tempC > 0 && ice > 0) r = -Math.min(k * ice, (heatCapacityJPerK() * tempC) / (BOILING_TIME_CONSTANT_S * ICE_FUSION_J_PER_G));
+      else if (tempC < 0 && liquidG > 0) r = Math.min(k * liquidG, (heatCapacityJPerK() * -tempC) / (BOILING_TIME_CONSTANT_S * ICE_FUSION_J_PER_G));
+      // Salt on ice: the liquid film at the ice's surface starts the freezing mixture (a seed of
+      // 0.1 % of the ice rate; assumption); once salt is dissolved the branch below takes over.
+      if (ice > 0 && r <= 0 && d.solutes.some((_, j) => d.undissolvedMol(x, j) > 0)) r = Math.min(r, -1e-3 * k * ice);
+      out[this.offset] = r;
+      return;
+    }
     if (tempC < 0 && allWater > 0) {
-      const xs = d.dissolvedMols(x);
-      const dissolved = xs.reduce((a, b) => a + b, 0);
-      if (dissolved <= 1e-12) {
-        iceEq = allWater * Math.min(1, -tempC / ICE_SMOOTHING_K);
-      } else {
-        const dtAll = d.freezingDepressionK(xs, allWater);
-        if (dtAll < -tempC) {
-          const residual = (wl: number) => d.freezingDepressionK(xs, wl) + tempC;
-          const lo = allWater * 1e-9;
-          const fLo = residual(lo);
-          if (fLo <= 0) iceEq = allWater;
-          else {
-            const root = brentRoot(residual, lo, allWater, { fa: fLo, fb: dtAll + tempC, xTol: 1e-8 * allWater });
-            iceEq = allWater - root.x;
-          }
+      const dtAll = d.freezingDepressionK(xs, allWater);
+      if (dtAll < -tempC) {
+        const residual = (wl: number) => d.freezingDepressionK(xs, wl) + tempC;
+        const lo = allWater * 1e-9;
+        const fLo = residual(lo);
+        if (fLo <= 0) iceEq = allWater;
+        else {
+          const root = brentRoot(residual, lo, allWater, { fa: fLo, fb: dtAll + tempC, xTol: 1e-8 * allWater });
+          iceEq = allWater - root.x;
         }
       }
     }
