@@ -83,7 +83,7 @@ describe('NUL characters and lone surrogates in request text', () => {
       expectRefused(res, 'file', /file name must not contain NUL/);
     }
     const attachments = await request(h.app).get(`/api/ingredients/${id}/attachments`).set(bearer());
-    expect(attachments.body.attachments.map((a: { filename: string }) => a.filename)).not.toContain('sheet.pdf');
+    expect(attachments.body.items.map((a: { filename: string }) => a.filename)).not.toContain('sheet.pdf');
   });
 });
 

@@ -50,7 +50,7 @@ describe('inviting an address that belongs to another workspace', () => {
     expect(mail.text).not.toMatch(/accept-invitation\?token=/);
 
     const harbourMail = await request(h.app).get('/api/mail-messages').set(bearer(admin));
-    expect(harbourMail.body.messages.some((m: { to: string[] }) => m.to.includes(demo.designer))).toBe(false);
+    expect(harbourMail.body.items.some((m: { to: string[] }) => m.to.includes(demo.designer))).toBe(false);
   });
 });
 

@@ -71,9 +71,9 @@ describe('where the sink files mail', () => {
     // And the harbour admin's mail page does not show it; the demo admin's does.
     const harbourInbox = await request(h.app).get('/api/mail-messages').set('Authorization', `Bearer ${await h.token(harbour.admin)}`);
     expect(harbourInbox.status).toBe(200);
-    expect(harbourInbox.body.messages.map((m: { subject: string }) => m.subject)).not.toContain(subject);
+    expect(harbourInbox.body.items.map((m: { subject: string }) => m.subject)).not.toContain(subject);
     const demoInbox = await request(h.app).get('/api/mail-messages').set('Authorization', `Bearer ${await h.token(demo.admin)}`);
-    expect(demoInbox.body.messages.map((m: { subject: string }) => m.subject)).toContain(subject);
+    expect(demoInbox.body.items.map((m: { subject: string }) => m.subject)).toContain(subject);
   });
 
   it("by the workspace of a pending invitation to the address", async () => {
@@ -122,9 +122,9 @@ describe('where the sink files mail', () => {
     expect(created.status).toBe(201);
     const mail = await waitForMail(h, email);
     const inbox = await request(h.app).get('/api/mail-messages').set('Authorization', `Bearer ${await h.token(harbour.admin)}`);
-    expect(inbox.body.messages.map((m: { subject: string }) => m.subject)).toContain(mail.subject);
+    expect(inbox.body.items.map((m: { subject: string }) => m.subject)).toContain(mail.subject);
     const other = await request(h.app).get('/api/mail-messages').set('Authorization', `Bearer ${await h.token(demo.admin)}`);
-    expect(other.body.messages.some((m: { to: string[] }) => m.to.includes(email))).toBe(false);
+    expect(other.body.items.some((m: { to: string[] }) => m.to.includes(email))).toBe(false);
   });
 });
 

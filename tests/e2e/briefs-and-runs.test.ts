@@ -43,13 +43,23 @@ describe('briefs, runs and the trade-off view in the browser', () => {
     // Run it and follow the run: progress while it works, then the ranked candidates.
     await page.getByRole('button', { name: 'Run optimiser' }).click();
     await page.waitForURL(/\/runs\/\d+$/);
-    await page.getByRole('progressbar', { name: 'Sets of actives solved' }).or(page.getByRole('heading', { name: 'Ranked candidates' })).first().waitFor();
+    await page.getByRole('progressbar', { name: 'Run steps done' }).or(page.getByRole('heading', { name: 'Candidates that meet the brief' })).first().waitFor();
     await b.screenshot(page, 'briefs-05-run-progress');
-    await page.getByRole('heading', { name: 'Ranked candidates' }).waitFor({ timeout: 90_000 });
+    await page.getByRole('heading', { name: 'Candidates that meet the brief' }).waitFor({ timeout: 90_000 });
     await expect.poll(() => page.getByRole('progressbar').count()).toBe(0);
     const rows = page.locator('tr[data-candidate-id]');
     expect(await rows.count()).toBeGreaterThanOrEqual(2);
     await b.screenshot(page, 'briefs-06-run-ranked');
+    // Every listed candidate was simulated and carries its hazards; its name opens its page.
+    await page.getByRole('columnheader', { name: /Hazards/ }).waitFor();
+    const firstLink = rows.first().getByRole('link', { name: /^C-\d+/ });
+    const href = await firstLink.getAttribute('href');
+    expect(href).toMatch(/^\/candidates\/\d+$/);
+    await firstLink.click();
+    await page.waitForURL(/\/candidates\/\d+$/);
+    await b.screenshot(page, 'briefs-06b-candidate-from-table');
+    await page.goBack();
+    await page.getByRole('heading', { name: 'Candidates that meet the brief' }).waitFor();
 
     // The Pareto plot draws one point per candidate.
     const plot = page.getByRole('group', { name: 'Hold margin against unit cost' });
@@ -57,15 +67,20 @@ describe('briefs, runs and the trade-off view in the browser', () => {
     expect(await plot.locator('[data-point-id]').count()).toBe(await rows.count());
     await plot.scrollIntoViewIfNeeded();
     await b.screenshot(page, 'briefs-07-trade-off');
+    // A point on the plot opens its candidate too (a double-click; O with the keyboard).
+    await plot.locator('[data-point-id]').first().dblclick();
+    await page.waitForURL(/\/candidates\/\d+$/);
+    await page.goBack();
+    await plot.waitFor();
 
     // One candidate chosen in the table, a second on the plot with the keyboard.
-    await page.getByRole('checkbox', { name: /^Select candidate/ }).first().check();
+    await page.getByRole('checkbox', { name: /^Select C-\d+/ }).first().check();
     const tabStop = plot.locator('[data-point-id][tabindex="0"]');
     await tabStop.focus();
     if ((await tabStop.getAttribute('aria-checked')) === 'true') await page.keyboard.press('ArrowRight');
     await page.keyboard.press('Enter');
     await expect.poll(() => plot.locator('[aria-checked="true"]').count()).toBe(2);
-    await expect.poll(() => page.getByRole('checkbox', { name: /^Select candidate/, checked: true }).count()).toBe(2);
+    await expect.poll(() => page.getByRole('checkbox', { name: /^Select C-\d+/, checked: true }).count()).toBe(2);
     await page.getByText('Temperature of the selected candidates').waitFor();
     await b.screenshot(page, 'briefs-08-two-selected');
 
@@ -84,7 +99,7 @@ describe('briefs, runs and the trade-off view in the browser', () => {
 
     // The run's table shows the shortlisted candidate too.
     await page.getByRole('link', { name: /^← Run \d+/ }).click();
-    await page.getByRole('heading', { name: 'Ranked candidates' }).waitFor();
+    await page.getByRole('heading', { name: 'Candidates that meet the brief' }).waitFor();
     await page.locator('tr[data-candidate-id]').getByText('Shortlisted', { exact: true }).first().waitFor();
     await context.close();
   });
