@@ -63,6 +63,17 @@ describe('who may send to the mail sink', () => {
 });
 
 describe('where the sink files mail', () => {
+  it("an address with an account is filed under its user's workspace, even while another workspace has a pending invitation to it", async () => {
+    const invite = await request(h.app).post('/api/invitations').set('Authorization', `Bearer ${await h.token(harbour.admin)}`).send({ email: demo.designer, name: 'Invited elsewhere', role: 'designer' });
+    expect(invite.status).toBe(201);
+    const subject = `account and invitation ${randomBytes(4).toString('hex')}`;
+    await appSends(demo.designer, subject);
+    const rows = await waitForStored(subject, 1);
+    await new Promise((r) => setTimeout(r, 300)); // a second copy, were one filed, would be stored by now
+    expect((await stored(subject)).map((r) => r.workspaceId)).toEqual([await workspaceId('demo')]);
+    expect(rows).toHaveLength(1);
+  });
+
   it("by the recipient's workspace, not by a header naming another one", async () => {
     const subject = `header says harbour ${randomBytes(4).toString('hex')}`;
     await appSends(demo.designer, subject, await workspaceId('harbour'));

@@ -38,7 +38,7 @@ function sameSecret(given: string, expected: string): boolean {
 
 /**
  * Where a message is filed: the workspaces of each recipient — the workspace of the user with
- * that address, or of a pending invitation to it. A header never moves mail to a workspace the
+ * that address, or, for an address with no account yet, of a pending invitation to it. A header never moves mail to a workspace the
  * recipient is not in: the app's workspace header only picks one of the recipient's own
  * workspaces when the address has several, and names the workspace of an address nobody has yet
  * (an invitation is mailed inside the transaction that creates it, so the sink cannot see it).
@@ -54,7 +54,11 @@ export async function fileByRecipient(recipients: string[], hintedWorkspaceId: n
       UserRecord.findAll({ where: lowerEmail('UserRecord'), attributes: ['email', 'workspaceId'] }),
       InvitationRecord.findAll({ where: { [Op.and]: [lowerEmail('InvitationRecord'), { revokedAt: null }] }, attributes: ['email', 'workspaceId'] }),
     ]);
-    for (const r of [...users, ...invitations]) byAddress.get(r.email.toLowerCase())?.add(r.workspaceId);
+    // An address with an account is its user's (one person, one workspace: DEVELOPERS.md,
+    // "Invitations"); a pending invitation to it from elsewhere never makes it a member there.
+    for (const r of users) byAddress.get(r.email.toLowerCase())?.add(r.workspaceId);
+    const hasAccount = new Set(users.map((r) => r.email.toLowerCase()));
+    for (const r of invitations) if (!hasAccount.has(r.email.toLowerCase())) byAddress.get(r.email.toLowerCase())?.add(r.workspaceId);
   }
   const filed = new Map<number | null, string[]>();
   for (const [address, workspaces] of byAddress) {

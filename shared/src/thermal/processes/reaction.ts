@@ -1,3 +1,4 @@
+import type { ReactionModel } from '../reaction-partners';
 import { WATER_MOLAR_MASS_G_PER_MOL } from '../constants';
 import { type HeatCapacityParts, type MassInventory, type ModelContext, type ProcessRef } from './common';
 
@@ -8,21 +9,8 @@ import { type HeatCapacityParts, type MassInventory, type ModelContext, type Pro
  * the reactants is drawn from the pack's liquid water.
  */
 
-export interface ReactionModel {
-  label: string;
-  maxExtentMol: number;
-  /** Net mol of liquid water consumed per mol of reaction (negative: produced). */
-  waterPerExtent: number;
-  dH_kJ_per_mol: number;
-  countedReactantMassPerExtentG: number;
-  countedReactantCpPerExtent: number;
-  productMassPerExtentG: number;
-  productCpPerExtent: number;
-  gasMassPerExtentG: number;
-  gasMolPerExtent: number;
-  externalReactantMassPerExtentG: number;
-  kPerS: number;
-}
+/** The reaction's model as set up with its partners (../reaction-partners.ts owns its shape). */
+export type { ReactionModel } from '../reaction-partners';
 
 export class ReactionProcesses {
   readonly reactions: ReactionModel[] = [];
