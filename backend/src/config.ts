@@ -12,7 +12,7 @@ export const trustProxySchema = z
   .trim()
   .regex(
     /^(|true|false|\d{1,2}|((loopback|linklocal|uniquelocal|[0-9a-fA-F.:]+(\/\d{1,3})?)(\s*,\s*(loopback|linklocal|uniquelocal|[0-9a-fA-F.:]+(\/\d{1,3})?))*))$/,
-    'TRUST_PROXY must be false, true, a hop count, or a comma-separated list of proxy addresses/subnets (loopback, linklocal, uniquelocal, 10.0.0.1, 10.0.0.0/8, ::1)',
+    'TRUST_PROXY must be false, true, a hop count, or a comma-separated list of proxy addresses/subnets (loopback, linklocal, uniquelocal, 10.1.2.3, 192.168.1.0/24, ::1)',
   )
   .default('');
 
