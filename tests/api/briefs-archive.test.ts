@@ -2,7 +2,7 @@
 // it can be archived: out of the default list, read-only, still reachable, and audited.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { demo, harbour, useHarness } from './support/harness';
+import { demo, harbour, runBriefToEnd, useHarness } from './support/harness';
 
 const h = useHarness();
 const bearer = (t: string) => ({ Authorization: `Bearer ${t}` });
@@ -16,16 +16,7 @@ beforeAll(async () => {
   const { executeRun } = await import('../../backend/src/runs/run-executor');
   await startRunWorker(({ runId }) => executeRun(runId));
   const token = await h.token(demo.designer);
-  const brief = (await request(h.app).post('/api/briefs').set(bearer(token)).send(sideline('Reviewed brief'))).body.brief;
-  const runId = (await request(h.app).post(`/api/briefs/${brief.id}/runs`).set(bearer(token))).body.runId as number;
-  const deadline = Date.now() + 80_000;
-  let run;
-  for (;;) {
-    run = (await request(h.app).get(`/api/runs/${runId}`).set(bearer(token))).body;
-    if (!['queued', 'running'].includes(run.status)) break;
-    if (Date.now() > deadline) throw new Error('run did not finish');
-    await new Promise((r) => setTimeout(r, 150));
-  }
+  const { brief, run } = await runBriefToEnd(h, token, sideline('Reviewed brief'), 80_000);
   expect(run.status).toBe('succeeded');
   const candidateId = run.candidates[0].id as number;
   expect((await request(h.app).post(`/api/candidates/${candidateId}/shortlist`).set(bearer(token)).send({ shortlisted: true })).status).toBe(200);

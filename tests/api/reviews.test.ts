@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { REVIEW_STATES, nextState, reviewAction, type ReviewAction, type ReviewState } from '../../shared/src/reviews/state-machine';
-import { demo, harbour, useHarness, type Harness } from './support/harness';
+import { demo, harbour, runBriefToEnd, useHarness, type Harness } from './support/harness';
 
 const h = useHarness();
 const bearer = (t: string) => ({ Authorization: `Bearer ${t}` });
@@ -21,16 +21,7 @@ beforeAll(async () => {
   const { executeRun } = await import('../../backend/src/runs/run-executor');
   await startRunWorker(({ runId }) => executeRun(runId));
   const token = await h.token(demo.designer);
-  const brief = (await request(h.app).post('/api/briefs').set(bearer(token)).send(sideline)).body.brief;
-  const runId = (await request(h.app).post(`/api/briefs/${brief.id}/runs`).set(bearer(token))).body.runId as number;
-  const deadline = Date.now() + 60_000;
-  let run;
-  for (;;) {
-    run = (await request(h.app).get(`/api/runs/${runId}`).set(bearer(token))).body;
-    if (!['queued', 'running'].includes(run.status)) break;
-    if (Date.now() > deadline) throw new Error('run did not finish');
-    await new Promise((r) => setTimeout(r, 150));
-  }
+  const { runId, run } = await runBriefToEnd(h, token, sideline, 60_000);
   expect(run.status).toBe('succeeded');
   expect(run.candidates.length).toBeGreaterThan(0);
   const first = run.candidates[0];

@@ -2,7 +2,7 @@
 // its regulatory decision, whatever their role is now; role changes are audited.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { demo, linkFrom, tokenFromLink, uniqueEmail, useHarness, waitForMail } from './support/harness';
+import { demo, linkFrom, runBriefToEnd, tokenFromLink, uniqueEmail, useHarness, waitForMail } from './support/harness';
 
 const h = useHarness();
 const bearer = (t: string) => ({ Authorization: `Bearer ${t}` });
@@ -18,16 +18,7 @@ beforeAll(async () => {
   const { executeRun } = await import('../../backend/src/runs/run-executor');
   await startRunWorker(({ runId }) => executeRun(runId));
   const token = await h.token(demo.designer);
-  const brief = (await request(h.app).post('/api/briefs').set(bearer(token)).send(sideline)).body.brief;
-  const runId = (await request(h.app).post(`/api/briefs/${brief.id}/runs`).set(bearer(token))).body.runId as number;
-  const deadline = Date.now() + 80_000;
-  let run;
-  for (;;) {
-    run = (await request(h.app).get(`/api/runs/${runId}`).set(bearer(token))).body;
-    if (!['queued', 'running'].includes(run.status)) break;
-    if (Date.now() > deadline) throw new Error('run did not finish');
-    await new Promise((r) => setTimeout(r, 150));
-  }
+  const { run } = await runBriefToEnd(h, token, sideline, 80_000);
   expect(run.status).toBe('succeeded');
   candidateIds = run.candidates.map((c: { id: number }) => c.id);
   expect(candidateIds.length).toBeGreaterThanOrEqual(2);

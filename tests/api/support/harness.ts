@@ -108,3 +108,22 @@ export function linkFrom(text: string, path: string): string {
 export function tokenFromLink(link: string): string {
   return decodeURIComponent(new URL(link).searchParams.get('token') ?? '');
 }
+
+/**
+ * Creates a brief as `token`'s user, runs the optimiser on it and waits until the run leaves
+ * queued/running; answers the brief, the run id and the run as GET /api/runs/:id gives it (the caller asserts on it).
+ */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- API bodies, as the callers' supertest reads give them
+export async function runBriefToEnd(h: Harness, token: string, briefBody: object, timeoutMs = 80_000): Promise<{ brief: any; runId: number; run: any }> {
+  const auth = { Authorization: `Bearer ${token}` };
+  const { default: request } = await import('supertest');
+  const brief = (await request(h.app).post('/api/briefs').set(auth).send(briefBody)).body.brief;
+  const runId = (await request(h.app).post(`/api/briefs/${brief.id}/runs`).set(auth)).body.runId as number;
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const run = (await request(h.app).get(`/api/runs/${runId}`).set(auth)).body;
+    if (!['queued', 'running'].includes(run.status)) return { brief, runId, run };
+    if (Date.now() > deadline) throw new Error('run did not finish');
+    await new Promise((r) => setTimeout(r, 150));
+  }
+}
