@@ -3,7 +3,7 @@
 // installs the npm packages when they are missing, then hands over to the TypeScript script.
 // Plain JavaScript because TypeScript itself is one of the packages it may have to install.
 import { spawnSync, spawn } from 'node:child_process';
-import { existsSync, statSync } from 'node:fs';
+import { existsSync, lstatSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -17,7 +17,12 @@ if (!command) {
 const marker = path.join(root, 'node_modules', '.package-lock.json');
 const lock = path.join(root, 'package-lock.json');
 const stale = !existsSync(marker) || statSync(lock).mtimeMs > statSync(marker).mtimeMs + 1000;
-if (stale) {
+// A checkout whose node_modules is a link to another checkout's install (a git worktree, say)
+// must not wipe that install with `npm ci`; it says so and goes on with what is there.
+const linkedInstall = existsSync(path.join(root, 'node_modules')) && lstatSync(path.join(root, 'node_modules')).isSymbolicLink();
+if (stale && linkedInstall) {
+  console.warn('[setup] node_modules is a link to another install; not running npm ci here. Run it in the linked checkout if packages changed.');
+} else if (stale) {
   console.log('[setup] installing npm packages (npm ci) ...');
   const result = spawnSync('npm', ['ci', '--no-audit', '--no-fund'], { cwd: root, stdio: 'inherit' });
   if (result.status !== 0) {
