@@ -3,7 +3,7 @@ import { WATER_MOLAR_MASS_G_PER_MOL } from '../thermal/constants';
 import {
   buildLinearModel,
   concentrationOf,
-  ingredientCoefficients,
+  setCoefficients,
   type ConcentrationEstimate,
   type LinearModel,
   type ParsedIngredient,
@@ -84,7 +84,7 @@ export function solveSetIterated(
   const build = (est: ConcentrationEstimate) =>
     buildLinearModel(
       set,
-      parsed.map((p) => ingredientCoefficients(p, ctx.targetTempC, est, port)),
+      setCoefficients(parsed, ctx, est, port),
       ctx,
       est,
     );

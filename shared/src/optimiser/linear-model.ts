@@ -2,6 +2,8 @@ import type { Brief, ConcentrationCap, ConstraintKind } from '../schemas/briefs'
 import type { ChemistryPort } from '../thermal/chemistry-port';
 import { INERT_CP_J_PER_GK, REFERENCE_TEMP_C, WATER_CP_J_PER_GK, WATER_MOLAR_MASS_G_PER_MOL } from '../thermal/constants';
 import { PackModel } from '../thermal/pack-model';
+import { ingredientProcessSchema, type ReactionProcess } from '../thermal/process';
+import { reactionSignature } from '../thermal/reaction-partners';
 import { resolveHeatExchange } from '../evaluation/heat-exchange';
 import { lumpedLoad } from '../evaluation/load';
 import type { IngredientSet, OptimiserIngredient, OptimiserWarning } from './types';
@@ -113,7 +115,7 @@ export function thermalContext(brief: Brief, extraCaps: readonly ConcentrationCa
 /** Per-gram figures of one ingredient at the target and a concentration estimate. */
 export interface IngredientCoefficients {
   ingredient: OptimiserIngredient;
-  kind: 'dissolution' | 'reaction' | 'crystallisation' | 'air-oxidation' | 'water' | 'inert';
+  kind: 'dissolution' | 'reaction' | 'crystallisation' | 'air-oxidation' | 'water' | 'inert' | 'hydrate-melting';
   /** Heat the process absorbs per gram at 25 °C, J/g (negative: released). */
   heatAbsorbedJPerG: number;
   /** Heat capacity per gram as charged, J/(g·K). */
@@ -140,6 +142,27 @@ export interface IngredientCoefficients {
   meltingPointC: number | null;
   costPerG: number;
   warnings: OptimiserWarning[];
+  /**
+   * A reaction member's partners in its set (set-aware coefficients, {@link setCoefficients}):
+   * the member that brings each other reactant and how many grams of it one gram of this one
+   * consumes. The partner-stoichiometry row keeps this one the limiting reagent.
+   */
+  reactionPartners?: ReactionPartner[];
+  /**
+   * A second column of a dissolving salt hydrate (same ingredient): the grams of it that stay
+   * undissolved and melt (hydrate-melting module), by the index of its dissolving column.
+   */
+  meltOf?: number;
+}
+
+/** Who brings a reactant of a reaction member, and how much of it one gram of the member takes. */
+export interface ReactionPartner {
+  /** Index of the partner in the set's members. */
+  index: number;
+  ingredientId: string;
+  reactantKey: string;
+  /** Grams of the partner one gram of the reaction member consumes: ν_t·M_t / (ν_A·M_A). */
+  gPerG: number;
 }
 
 /** An ingredient parsed once per run: a PackModel holding 1 g of it. */
@@ -258,21 +281,7 @@ export function ingredientCoefficients(p: ParsedIngredient, targetTempC: number,
       warnings: [...base.warnings, ...m.warnings.list()],
     };
   }
-  const r = m.reactions[0];
-  if (r) {
-    const ext = r.maxExtentMol; // mol of reaction per g
-    const waterTaken = r.waterPerExtent * WATER_MOLAR_MASS_G_PER_MOL * ext;
-    return {
-      ...base,
-      kind: 'reaction',
-      heatAbsorbedJPerG: r.dH_kJ_per_mol * 1000 * ext,
-      cpInitialJPerGK: r.countedReactantCpPerExtent * ext,
-      cpFinalJPerGK: r.productCpPerExtent * ext - waterTaken * WATER_CP_J_PER_GK,
-      liquidWaterGPerG: -waterTaken,
-      gasLPerG: r.gasMolPerExtent * ext * GAS_MOLAR_VOLUME_L_PER_MOL,
-      warnings: m.warnings.list(),
-    };
-  }
+  if (m.reactions.length) return { ...base, ...reactionCoefficients(m) };
   const c = m.crystals[0];
   if (c) {
     const active = targetTempC < c.meltingPointC;
@@ -304,6 +313,167 @@ export function ingredientCoefficients(p: ParsedIngredient, targetTempC: number,
   const inert = m.inerts[0];
   const cp = inert?.cpJPerGK ?? INERT_CP_J_PER_GK.additive;
   return { ...base, kind: 'inert', cpInitialJPerGK: cp, cpFinalJPerGK: cp };
+}
+
+/**
+ * The reaction part of a pack model, per gram of what it holds: ΔrH·ξ_max summed over its
+ * reactions, the counted reactants' and the products' heat capacities, the water taken and the
+ * gas evolved, plus what the reactions leave unused (reaction-partners.ts: an inert solid).
+ * With no partner in the model a reaction's ξ_max is 0, and the ingredient is that inert solid.
+ */
+function reactionCoefficients(m: PackModel): Pick<IngredientCoefficients, 'kind' | 'heatAbsorbedJPerG' | 'cpInitialJPerGK' | 'cpFinalJPerGK' | 'liquidWaterGPerG' | 'gasLPerG' | 'warnings'> {
+  let heat = 0;
+  let cp0 = 0;
+  let cpf = 0;
+  let water = 0;
+  let gas = 0;
+  for (const r of m.reactions) {
+    const ext = r.maxExtentMol;
+    const waterTaken = r.waterPerExtent * WATER_MOLAR_MASS_G_PER_MOL * ext;
+    heat += r.dH_kJ_per_mol * 1000 * ext;
+    cp0 += r.countedReactantCpPerExtent * ext;
+    cpf += r.productCpPerExtent * ext - waterTaken * WATER_CP_J_PER_GK;
+    water -= waterTaken;
+    gas += r.gasMolPerExtent * ext * GAS_MOLAR_VOLUME_L_PER_MOL;
+  }
+  for (const l of m.inerts) {
+    cp0 += l.massG * l.cpJPerGK;
+    cpf += l.massG * l.cpJPerGK;
+  }
+  return { kind: 'reaction', heatAbsorbedJPerG: heat, cpInitialJPerGK: cp0, cpFinalJPerGK: cpf, liquidWaterGPerG: water, gasLPerG: gas, warnings: m.warnings.list() };
+}
+
+const setModels = new WeakMap<ParsedIngredient, Map<string, PackModel>>();
+
+/** A PackModel of 1 g of a reaction member and its partners at the given grams, partners from the pack (cached per member and partners). */
+function reactionModel(port: ChemistryPort, lead: ParsedIngredient, partners: readonly { p: ParsedIngredient; massG: number }[], packAreaM2: number): PackModel {
+  const key = partners.map((q) => `${q.p.ingredient.id}:${q.massG}`).join('|');
+  let byKey = setModels.get(lead);
+  if (!byKey) setModels.set(lead, (byKey = new Map()));
+  let m = byKey.get(key);
+  if (!m) {
+    const components = [lead, ...partners.map((q) => q.p)].map((p, i) => ({ key: p.ingredient.id, massG: i === 0 ? 1 : partners[i - 1]!.massG, process: p.ingredient.process! }));
+    m = new PackModel(port, components, { packAreaM2, reactionPartners: 'from-pack' });
+    byKey.set(key, m);
+  }
+  return m;
+}
+
+/**
+ * Per-gram coefficients of every member of a set, with each reaction's partners taken from the
+ * set as the time model takes them from the pack (reaction-partners.ts, one computation):
+ *
+ * - a reaction member A whose other reactants t are brought by members k (a dissolving solid of
+ *   species t, or a member with the same reaction whose own reactant is t) is the limiting
+ *   reagent: one gram of A consumes r_k = ν_t·M_t/(ν_A·M_A) g of k, and the row
+ *   m_k − Σ_A r_k·m_A ≥ 0 (partner-stoichiometry) keeps it so. A's coefficients are those of a
+ *   PackModel of 1 g of A with r_k g of each partner (the reaction at ξ_max = 1/(ν_A·M_A)),
+ *   less r_k times k's own coefficients (the partner grams it consumes do not dissolve), so
+ *   Σ m·coefficients is the pack's figure whenever the row holds. Example: Ba(OH)2·8H2O +
+ *   2 NH4Cl: r = 2 × 53.49 / 315.46 ≈ 0.339 g NH4Cl per g.
+ * - a reaction member with a reactant no member brings contributes no reaction heat: its
+ *   coefficients are those of a PackModel of it alone with partners from the pack (the reaction
+ *   does not run; it stays as an inert solid, and its warning says so).
+ * - of several members with the same reaction, the first is the one the row is written for; the
+ *   others are its partners.
+ * - every other member: {@link ingredientCoefficients}.
+ * - a dissolving salt hydrate that melts (hydrate-melting.ts: CaCl2·6H2O, Na2SO4·10H2O, …) gets
+ *   a second column, appended after the members, when the module's equilibrium has it molten at
+ *   the end temperature T* (T* ≥ T_m): grams that stay undissolved and melt, absorbing
+ *   L₂₅ = L(T_m) − (c_l − c_s)(T_m − 25 °C) per gram (Kirchhoff), c_0 = c_s, c_f = c_l, no
+ *   water or solute. Charged solid, the hydrate has then crossed its melting point on the way
+ *   to T*; with T* below T_m a melt freezes again by the end and its net heat of fusion is 0, so
+ *   no column. Example: CaCl2·6H2O, L = 187 J/g at 29.8 °C.
+ */
+export function setCoefficients(parsed: readonly ParsedIngredient[], ctx: Pick<ThermalContext, 'targetTempC' | 'packAreaM2'>, estimate: ConcentrationEstimate, port: ChemistryPort): IngredientCoefficients[] {
+  const processes = parsed.map((p) => {
+    const r = ingredientProcessSchema.safeParse(p.ingredient.process);
+    return r.success ? r.data : null;
+  });
+  const out = parsed.map((p) => ingredientCoefficients(p, ctx.targetTempC, estimate, port));
+  const leads = new Map<string, number>();
+  const alone = (i: number): IngredientCoefficients => ({ ...out[i]!, ...reactionCoefficients(reactionModel(port, parsed[i]!, [], ctx.packAreaM2)) });
+  processes.forEach((q, i) => {
+    if (q?.kind !== 'reaction' || q.basis === 'premix') return;
+    const sig = reactionSignature(q);
+    if (!leads.has(sig)) leads.set(sig, i);
+    else out[i] = alone(i);
+  });
+  for (const i of leads.values()) {
+    const q = processes[i] as ReactionProcess;
+    const sig = reactionSignature(q);
+    const own = q.reactants.find((t) => t.key === q.ingredientKey)!;
+    const partners: ReactionPartner[] = [];
+    let missing = false;
+    for (const t of q.reactants) {
+      if (t.key === 'H2O(l)' || t.key === q.ingredientKey) continue;
+      const k = processes.findIndex((o, j) => j !== i && ((o?.kind === 'dissolution' && o.solidKey === t.key) || (o?.kind === 'reaction' && o.basis !== 'premix' && o.ingredientKey === t.key && reactionSignature(o) === sig)));
+      if (k < 0) {
+        missing = true;
+        break;
+      }
+      const gPerG = (t.coef * port.molarMass_g_per_mol(t.key)) / (own.coef * port.molarMass_g_per_mol(q.ingredientKey));
+      partners.push({ index: k, ingredientId: parsed[k]!.ingredient.id, reactantKey: t.key, gPerG });
+    }
+    if (missing) {
+      out[i] = alone(i);
+      continue;
+    }
+    if (!partners.length) continue;
+    const model = reactionModel(port, parsed[i]!, partners.map((r) => ({ p: parsed[r.index]!, massG: r.gPerG })), ctx.packAreaM2);
+    const c: IngredientCoefficients = { ...out[i]!, ...reactionCoefficients(model), reactionPartners: partners };
+    for (const r of partners) {
+      const k = out[r.index]!;
+      c.heatAbsorbedJPerG -= r.gPerG * k.heatAbsorbedJPerG;
+      c.cpInitialJPerGK -= r.gPerG * k.cpInitialJPerGK;
+      c.cpFinalJPerGK -= r.gPerG * k.cpFinalJPerGK;
+      c.liquidWaterGPerG -= r.gPerG * k.liquidWaterGPerG;
+      c.soluteGPerG -= r.gPerG * k.soluteGPerG;
+      c.soluteMolPerG -= r.gPerG * k.soluteMolPerG;
+      c.gasLPerG -= r.gPerG * k.gasLPerG;
+    }
+    out[i] = c;
+  }
+  // Salt hydrates that melt: a column for the undissolved grams when they are molten at the end.
+  const end = new Array<number>(0);
+  parsed.forEach((p, j) => {
+    const melt = p.model.hydrateMelt.melts[0];
+    const solute = p.model.solutes[0];
+    if (!melt || !solute || out[j]!.kind !== 'dissolution') return;
+    end.length = p.model.size;
+    end.fill(0);
+    p.model.hydrateMelt.equilibrium(ctx.targetTempC, end);
+    if (end[p.model.hydrateMelt.offset] !== 1) return;
+    out.push({
+      ...out[j]!,
+      kind: 'hydrate-melting',
+      heatAbsorbedJPerG: melt.latentRefJPerG,
+      cpInitialJPerGK: solute.solidCpJPerGK,
+      cpFinalJPerGK: melt.data.liquidCpJPerGK,
+      liquidWaterGPerG: 0,
+      soluteGPerG: 0,
+      soluteMolPerG: 0,
+      solubilityGPer100g: null,
+      meltingPointC: melt.data.meltingPointC,
+      meltOf: j,
+      warnings: [],
+    });
+  });
+  return out;
+}
+
+/**
+ * Grams of each ingredient of a composition, in member order: a hydrate's melting column joins
+ * its dissolving column (one ingredient, one line).
+ */
+export function gramsByIngredient(coefficients: readonly IngredientCoefficients[], massesG: readonly number[]): { ingredient: OptimiserIngredient; massG: number }[] {
+  const out = new Map<string, { ingredient: OptimiserIngredient; massG: number }>();
+  coefficients.forEach((c, i) => {
+    const e = out.get(c.ingredient.id);
+    if (e) e.massG += massesG[i] ?? 0;
+    else out.set(c.ingredient.id, { ingredient: c.ingredient, massG: massesG[i] ?? 0 });
+  });
+  return [...out.values()];
 }
 
 /**
@@ -384,6 +554,9 @@ export interface LinearModel {
  *   surface limit, the film-limited steady state T_env + Ṅ_O2·|ΔH_O2|/UA must not pass it: a
  *   row with no per-gram terms, 0 ≥ Ṅ_O2·|ΔH_O2| − UA·(T_lim − T_env) (W), that only the
  *   film and the contact can satisfy.
+ * - partner-stoichiometry (≥, g), per member k that brings another reactant of reaction members A
+ *   ({@link setCoefficients}): m_k − Σ_A r_k·m_A ≥ 0, so the reaction member is the limiting
+ *   reagent and the partner's rest dissolves (or stays) as its own process.
  * - concentration-cap (≤, g), per cap on a member: m_k − f_k·Σ m_i ≤ 0.
  * - additive-ratio (≥/≤, g), per need of a member: m_d − r_min·m_a ≥ 0, m_d − r_max·m_a ≤ 0.
  *
@@ -430,6 +603,10 @@ export function buildLinearModel(set: IngredientSet, coefficients: IngredientCoe
     const sol = c.solubilityGPer100g;
     const row = water.map((w) => (-sol / 100) * w);
     row[j] = (row[j] ?? 0) + c.soluteGPerG;
+    // The grams a reaction member consumes of this solid do not dissolve (setCoefficients).
+    coefficients.forEach((a, i) => {
+      for (const r of a.reactionPartners ?? []) if (r.index === j) row[i] = (row[i] ?? 0) - r.gPerG * c.soluteGPerG;
+    });
     rows.push({
       id: `solubility:${c.ingredient.id}`,
       kind: 'solubility',
@@ -445,6 +622,24 @@ export function buildLinearModel(set: IngredientSet, coefficients: IngredientCoe
   if (coefficients.some((c) => c.kind === 'reaction' && c.liquidWaterGPerG < 0)) {
     rows.push({ id: 'water-for-reaction', kind: 'water-for-reaction', label: 'water the reactions take', coefficients: water, sense: 'ge', rhs: 0, unit: 'g', unitStep: 1, unitLabel: 'g of water' });
   }
+  coefficients.forEach((k, j) => {
+    const takers = coefficients.flatMap((a, i) => (a.reactionPartners ?? []).filter((r) => r.index === j).map((r) => ({ i, r, name: a.ingredient.name })));
+    if (!takers.length) return;
+    const row = new Array<number>(nv).fill(0);
+    row[j] = 1;
+    for (const t of takers) row[t.i] = (row[t.i] ?? 0) - t.r.gPerG;
+    rows.push({
+      id: `partner-stoichiometry:${k.ingredient.id}`,
+      kind: 'partner-stoichiometry',
+      label: `enough ${k.ingredient.name} for the reaction of ${takers.map((t) => `${t.name} (${round(t.r.gPerG, 3)} g per g)`).join(' and ')}`,
+      coefficients: row,
+      sense: 'ge',
+      rhs: 0,
+      unit: 'g',
+      unitStep: 1,
+      unitLabel: 'g',
+    });
+  });
   const fillMax = ctx.maxMassG - ctx.packaging.massG;
   rows.push({ id: 'total-mass', kind: 'total-mass', label: `pack mass at most ${ctx.maxMassG} g`, coefficients: new Array<number>(nv).fill(1), sense: 'le', rhs: fillMax, unit: 'g', unitStep: 1, unitLabel: 'g' });
   if (ctx.maxUnitCost !== null) {
@@ -514,8 +709,8 @@ export function buildLinearModel(set: IngredientSet, coefficients: IngredientCoe
   for (const cap of ctx.caps) {
     const k = coefficients.findIndex((c) => c.ingredient.id === cap.ingredientId);
     if (k < 0) continue;
-    const row = new Array<number>(nv).fill(-cap.maxMassFraction);
-    row[k] = 1 - cap.maxMassFraction;
+    // Every column of the ingredient (a hydrate's melting column too) counts towards its cap.
+    const row = coefficients.map((c) => (c.ingredient.id === cap.ingredientId ? 1 - cap.maxMassFraction : -cap.maxMassFraction));
     rows.push({
       id: `concentration-cap:${cap.ingredientId}:${cap.maxMassFraction}`,
       kind: 'concentration-cap',

@@ -16,6 +16,7 @@ import { diagnoseInfeasible } from './diagnose-infeasible';
 import { enumerateSets } from './enumerate-sets';
 import { solveSetIterated, saturationEstimate, type EnthalpyIterationOptions, type IteratedSet } from './iterate-enthalpy';
 import {
+  gramsByIngredient,
   ingredientCoefficients,
   objectiveValue,
   parseIngredient,
@@ -214,7 +215,7 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
   if (!cancelled) total = done + toVerify.length;
   const simulate = (w: Working): { verification: Verification; profile: TimeProfileResult | null } => {
     // The evaluation core applies the calibrations itself (over the uncalibrated port).
-    const lines = w.iterated.model.coefficients.map((c, i) => lineOf(c.ingredient, w.iterated.solution.massesG[i] ?? 0));
+    const lines = gramsByIngredient(w.iterated.model.coefficients, w.iterated.solution.massesG).map((g) => lineOf(g.ingredient, g.massG));
     const { profile, evaluation: _evaluation, ...verification } = verifyComposition(basePort, brief, lines, {
       ...(options.verifyRtol !== undefined ? { rtol: options.verifyRtol } : {}),
       calibrations,
@@ -406,8 +407,9 @@ function toWorking(it: IteratedSet, ctx: ThermalContext): Working {
   });
   const extreme = cf > 0 ? ctx.initialTempC - (h - k) / cf : ctx.initialTempC;
   const eps = 1e-6 * Math.max(fill, 1e-9);
-  const effectiveActives = m.set.activeIds.filter((id) => (x[m.coefficients.findIndex((c) => c.ingredient.id === id)] ?? 0) > eps);
-  const composition = m.coefficients.map((c, i) => ({ ingredientId: c.ingredient.id, name: c.ingredient.name, role: c.ingredient.role, massG: x[i] ?? 0 }));
+  const grams = gramsByIngredient(m.coefficients, x);
+  const effectiveActives = m.set.activeIds.filter((id) => (grams.find((g) => g.ingredient.id === id)?.massG ?? 0) > eps);
+  const composition = grams.map((g) => ({ ingredientId: g.ingredient.id, name: g.ingredient.name, role: g.ingredient.role, massG: g.massG }));
   const ingredientCount = composition.filter((c) => c.massG > eps).length;
   const predictedHoldMarginMin = m.exchangeJPerMin > 0 ? surplus / m.exchangeJPerMin : null;
   const binding = it.solution.binding.map((id) => {

@@ -311,6 +311,7 @@ export const CONSTRAINT_KINDS = [
   'oxygen-supply',
   'concentration-cap',
   'additive-ratio',
+  'partner-stoichiometry',
 ] as const;
 export const constraintKindSchema = z.enum(CONSTRAINT_KINDS);
 export type ConstraintKind = z.infer<typeof constraintKindSchema>;

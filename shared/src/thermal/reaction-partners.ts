@@ -66,7 +66,8 @@ const isWater = (key: string) => key === 'H2O(l)';
 const phaseOf = (key: string) => /\((cr|l|g|aq|ai|ao)\)$/.exec(key)?.[1] ?? null;
 const formulaOf = (key: string) => key.replace(/\((cr|l|g|aq|ai|ao)\)$/, '');
 
-function signature(p: ReactionProcess): string {
+/** Two reaction processes with the same signature are one reaction (their reactants and products as written). */
+export function reactionSignature(p: ReactionProcess): string {
   const side = (ts: readonly { key: string; coef: number }[]) => ts.map((t) => `${t.coef}*${t.key}`).sort().join('+');
   return `${side(p.reactants)}=${side(p.products)}`;
 }
@@ -107,7 +108,7 @@ export function setUpReactions(
     if (!p.reactants.some((t) => t.key === p.ingredientKey)) {
       throw new ThermalModelError(`expected ingredientKey ${p.ingredientKey} among the reactants, found ${p.reactants.map((t) => t.key).join(', ')}`, { field: `${c.field}.process.ingredientKey` });
     }
-    const sig = signature(p);
+    const sig = reactionSignature(p);
     groups.set(sig, [...(groups.get(sig) ?? []), i]);
   });
 
