@@ -57,6 +57,7 @@ export const CONSTRAINT_WORDS: Record<string, string> = {
   'oxygen-supply': 'oxygen supply',
   'concentration-cap': 'concentration cap',
   'additive-ratio': 'additive ratio',
+  'partner-stoichiometry': 'reaction partner',
 };
 
 /**

@@ -16,6 +16,8 @@ export interface RankItem {
   setSize: number;
   /** Ingredients with non-zero mass. */
   ingredientCount: number;
+  /** Its ingredients are incompatible (incompatible-sets.ts); absent: compatible. */
+  incompatible?: boolean;
 }
 
 /** Objective values closer than this (relative) are a tie, broken towards the simpler mixture. */
@@ -33,13 +35,20 @@ function nearlyEqual(a: number, b: number, tol = TIE_TOLERANCE): boolean {
  * candidate that meets the linear model but misses in simulation ranks below every one that
  * passes —, then failed), then by the objective (least cost / least mass ascending, most hold
  * margin descending), ties (within {@link TIE_TOLERANCE}) to the lower hazard score, then the simpler mixture: fewer
- * actives in use, fewer actives in the set, fewer ingredients, then key. Returns a new array.
+ * actives in use, fewer actives in the set, fewer ingredients, then key. Within a verification
+ * group, sets marked incompatible come after the compatible ones unless `allowIncompatible`.
+ * Returns a new array.
  *
  * @example rankCandidates(items, 'least-cost').map((c) => c.key) // cheapest passing first
  */
-export function rankCandidates<T extends RankItem>(items: readonly T[], objective: Objective): T[] {
+export function rankCandidates<T extends RankItem>(items: readonly T[], objective: Objective, options: { allowIncompatible?: boolean } = {}): T[] {
   const dir = objective === 'most-hold-margin' ? -1 : 1;
-  return [...items].sort((a, b) => compareByObjective(a, b, dir, true));
+  const apart = options.allowIncompatible !== true;
+  return [...items].sort((a, b) => {
+    // Within each verification group, incompatible sets after the compatible ones unless the brief allows them.
+    if (apart && a.verificationStatus === b.verificationStatus && Boolean(a.incompatible) !== Boolean(b.incompatible)) return a.incompatible ? 1 : -1;
+    return compareByObjective(a, b, dir, true);
+  });
 }
 
 /** Order by the objective only (before verification), ties to the simpler mixture. */

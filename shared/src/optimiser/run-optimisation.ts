@@ -36,6 +36,7 @@ import { lineOf } from '../evaluation/components';
 import { chemistryModelFor } from '../evaluation/chemistry-cache';
 import { hazardCapsFor } from '../hazards/optimiser-hazards';
 import { hazardsOfCandidate } from './candidate-hazards';
+import { candidateIncompatibilities } from './incompatible-sets';
 import { applyIngredientCalibrations, contactUaMultiplier, enthalpyFactorsBySolute, scaledEnthalpyPort, type ModelCalibrations } from '../calibration/calibrations';
 
 /** What a run is doing: solving the sets' LPs, simulating candidates, computing hazard notes. */
@@ -292,7 +293,12 @@ export function runOptimisation(input: RunOptimisationInput, runOptions: RunOpti
     }
   }
 
-  const ranked = rankCandidates(distinct, brief.objective);
+  // Incompatible sets are marked in words and ranked after the compatible ones unless the brief allows them (incompatible-sets.ts).
+  for (const w of distinct) {
+    w.candidate.incompatibilities = candidateIncompatibilities(w.candidate, byId, input.chemistry, w.candidate.verification.endTempC ?? brief.targetTempC);
+    w.incompatible = w.candidate.incompatibilities.length > 0;
+  }
+  const ranked = rankCandidates(distinct, brief.objective, { allowIncompatible: brief.allowIncompatible });
   const pareto = paretoFlags(ranked);
   const candidates = ranked.map((w, i) => ({ ...w.candidate, rank: i + 1, pareto: pareto[i]! }));
   const excludedIngredients = enumeration.excluded.map((e) => ({ ingredientId: e.ingredientId, name: e.name, reason: e.reason }));

@@ -194,6 +194,11 @@ const briefFields = {
   /** Most active ingredients per mixture, 1–3. */
   maxActives: z.number({ error: 'must be 1, 2 or 3' }).int('must be 1, 2 or 3').min(1, 'must be 1, 2 or 3').max(3, 'must be 1, 2 or 3').default(BRIEF_DEFAULTS.maxActives),
   packaging: packagingSchema.default({ massG: 12, heatCapacityJPerK: 24, cost: '0.08' }),
+  /**
+   * Rank sets whose ingredients are incompatible (ions that precipitate, a gas from their meeting,
+   * reactive pairs) among the others; false (the default): after every compatible one.
+   */
+  allowIncompatible: z.boolean({ error: 'must be true or false' }).default(false),
   /** What the pack heats or cools; null (the default): the pack itself is judged. */
   load: loadSchema.nullable().default(null),
   notes: textSchema({ error: 'must be text' }).max(4000, 'must be at most 4000 characters').default(''),
@@ -354,6 +359,17 @@ export const verificationSchema = z.object({
 });
 export type Verification = z.infer<typeof verificationSchema>;
 
+/** Why a candidate's ingredients do not belong together (optimiser/incompatible-sets.ts), in words. */
+export const candidateIncompatibilitySchema = z.object({
+  kind: z.enum(['precipitation', 'gas', 'reactive']),
+  /** The ingredients involved, by name. */
+  between: z.array(z.string()),
+  /** The solid precipitated, the gas evolved, or the hazard rule id. */
+  subject: z.string(),
+  message: z.string(),
+});
+export type CandidateIncompatibility = z.infer<typeof candidateIncompatibilitySchema>;
+
 export const candidateSchema = z.object({
   /** Ids of the active ingredients of the set, sorted. */
   setIds: z.array(z.string()),
@@ -394,6 +410,8 @@ export const candidateSchema = z.object({
    * and the simulated hold margin of the composition listed (min; negative: short).
    */
   correction: z.object({ rounds: z.number().int().min(0), heatBudgetCorrectionJ: z.number(), finalHoldMarginMin: z.number().nullable() }).optional(),
+  /** What goes wrong when its ingredients meet; empty: compatible. Absent on runs made before the check. */
+  incompatibilities: z.array(candidateIncompatibilitySchema).optional(),
   warnings: z.array(z.object({ code: z.string(), message: z.string() })),
 });
 export type Candidate = z.infer<typeof candidateSchema>;

@@ -29,6 +29,7 @@ export const BRIEF_FIELDS = [
   'excludedHazardClasses',
   'objective',
   'maxActives',
+  'allowIncompatible',
   'packaging.massG',
   'packaging.heatCapacityJPerK',
   'packaging.cost',

@@ -305,6 +305,16 @@ export function BriefForm({
               ))}
             </SelectField>
           </div>
+          <div>
+            <label className="flex items-center gap-2 text-body text-ink-900">
+              <input type="checkbox" className="size-4" aria-describedby="allow-incompatible-hint" {...form.register('allowIncompatible')} />
+              Rank incompatible mixtures among the others
+            </label>
+            <p id="allow-incompatible-hint" className="mt-1 pl-6 text-caption text-ink-500">
+              A mixture whose ingredients do not belong together (ions that precipitate, a gas from their meeting, an oxidiser
+              with a fuel) is marked in the ranked table either way. Unticked, it ranks after every compatible one.
+            </p>
+          </div>
         </Section>
 
         <Section title="Packaging" description="Pouch, inner bag and anything else that is not an ingredient.">

@@ -64,6 +64,7 @@ export function BriefSummary({ brief, currency }: { brief: BriefRecord; currency
       <Group title="Optimiser and packaging">
         <Row label="Objective">{OBJECTIVE_NAMES[s.objective]}</Row>
         <Row label="Actives">up to {formatNumber(s.maxActives)}</Row>
+        <Row label="Incompatible mixtures">{s.allowIncompatible ? 'ranked among the others' : 'ranked after the compatible ones'}</Row>
         <Row label="Ingredients">
           {s.allowedIngredientIds.length ? `${s.allowedIngredientIds.length} allowed` : 'whole library'}
           {s.excludedIngredientIds.length ? `, ${s.excludedIngredientIds.length} excluded` : ''}

@@ -99,6 +99,18 @@ export function CandidatesTable({
                 Shortlisted
               </Badge>
             )}
+            {(row.original.incompatibilities?.length ?? 0) > 0 && (
+              <span className="mt-0.5 flex flex-col gap-0.5">
+                <Badge tone="caution" className="self-start">
+                  Incompatible
+                </Badge>
+                <ul className="max-w-64 text-caption text-rust-700">
+                  {row.original.incompatibilities!.map((i) => (
+                    <li key={`${i.kind}:${i.subject}`}>{i.message}</li>
+                  ))}
+                </ul>
+              </span>
+            )}
           </span>
         ),
       }),
@@ -289,7 +301,8 @@ export function CandidatesTable({
       <p className="px-5 pt-2 text-caption text-ink-500">
         ◆ on the Pareto front over cost, mass, hold margin and hazard score. Every figure is from the time model under the
         brief&apos;s conditions. Hazards: the mixture&apos;s GHS signal word and pictogram codes, and flags from the hazard notes
-        (open a candidate for the notes).
+        (open a candidate for the notes); sort by the Hazards header to rank by hazard score. Incompatible: its ingredients do
+        not belong together, said in words; such a mixture ranks after the compatible ones unless the brief allows it.
       </p>
     </div>
   );
