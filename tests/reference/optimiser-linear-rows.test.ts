@@ -86,7 +86,7 @@ describe('a reaction takes its partner from the set, and the partner limits noth
 
 describe('a salt hydrate melts in the linear model only when it ends molten', () => {
   // CaCl2·6H2O: heat of fusion 170–192 J/g at 29–30 °C (published range for the phase-change
-  // salt, e.g. Kenisarin & Mahkamov, Solar Energy 145 (2016) 73, review tables; from memory).
+  // salt: Kenisarin & Mahkamov, "Salt hydrates as latent heat storage materials", Solar Energy Materials & Solar Cells 145 (2016), review tables; from memory).
   const warm = (target: number, initial: number) => thermalContext(briefSchema.parse({ name: 'pcm', packType: 'warm', ambientC: initial, targetTempC: target }));
 
   it('a warm target above the melting point (20 → 35 °C, crossing 29.8 °C) adds a melting column absorbing the heat of fusion', () => {

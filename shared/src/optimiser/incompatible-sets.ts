@@ -13,7 +13,10 @@ import type { OptimiserIngredient } from './types';
  *   + water → H2) is the brief's gas limit's business (the gas row), not an incompatibility;
  *   gas from a reaction that takes a reactant of another ingredient is one;
  * - `incompat.water-reactive` is the intended reaction when every water-reactive ingredient's
- *   own process is a reaction that takes water (quicklime, magnesium).
+ *   own process is a reaction that takes water (quicklime, magnesium);
+ * - `incompat.acid-base` is the intended reaction when the pair is one member's reaction and
+ *   the partner it takes (barium hydroxide + ammonium chloride).
+ * The hazard notes still carry every such caution; this decides only the mark and the ranking.
  * Precipitation between two ingredients' ions and the other reactive pairs always count.
  *
  * @example candidateIncompatibilities(candidate, byId, lib, 25) // → [{ kind: 'precipitation', between: ['Sodium carbonate decahydrate', 'Calcium chloride hexahydrate'], … }]
@@ -39,6 +42,15 @@ export function candidateIncompatibilities(
     if (i.kind === 'reactive' && i.subject === 'incompat.water-reactive') {
       const reactive = parts.filter((c) => c.hazardData?.incompatibilityGroups.includes('water-reactive'));
       return reactive.every((c) => c.process?.kind === 'reaction' && c.process.reactants.some((t) => t.key === 'H2O(l)'));
+    }
+    if (i.kind === 'reactive' && i.subject === 'incompat.acid-base') {
+      // The pair is one member's reaction and the partner it takes (barium hydroxide + ammonium chloride).
+      return parts.some((r) => {
+        const p = r.process;
+        if (p?.kind !== 'reaction') return false;
+        const inIt = (c: (typeof parts)[number]) => c === r || (c.process?.kind === 'dissolution' && p.reactants.some((t) => t.key === (c.process as { solidKey: string }).solidKey));
+        return i.between.length > 1 && i.between.every((n) => parts.some((c) => c.name === n && inIt(c)));
+      });
     }
     return false;
   };
