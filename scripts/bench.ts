@@ -50,6 +50,10 @@ row('wall time, cold (first run in the process, fresh chemistry port)', ms(opt.f
 row('wall time, warm (median of 5)', ms(opt.fullRun.warmMedianMs));
 row('LPs per second (warm, whole run incl. verification)', opt.fullRun.lpsPerSecond.toFixed(0));
 row('all 4 demo briefs, warm', ms(opt.fullRun.allDemoBriefsMs));
+row(
+  'demo briefs: sets whose corrected optimum passes in simulation (top 20 each)',
+  `${opt.fullRun.passShare.passed} of ${opt.fullRun.passShare.simulated} (${opt.fullRun.passShare.share === null ? '—' : `${(opt.fullRun.passShare.share * 100).toFixed(0)} %`})`,
+);
 section(`(b) the final LP of each of the ${opt.highs.lps} sets, javascript-lp-solver vs HiGHS`);
 row('javascript-lp-solver', `${ms(opt.highs.jsLpMs)} (${((opt.highs.jsLpMs / opt.highs.lps) * 1000).toFixed(1)} µs/LP)`);
 row('HiGHS (one persistent model reloaded per LP)', `${ms(opt.highs.highsMs)} (${((opt.highs.highsMs / opt.highs.lps) * 1000).toFixed(1)} µs/LP)`);
