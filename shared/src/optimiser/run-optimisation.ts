@@ -112,8 +112,10 @@ interface Working extends RankItem {
  * 4. drop a candidate whose composition is that of a simpler set (an active at 0 g): ties go
  *    to the simpler mixture;
  * 5. order by the objective, verify the best `verifyTop` with the time model (verify.ts), then
- *    rank: passed, not verified, missed, failed; objective; simpler first (rank.ts); flag the
- *    Pareto front; sensitivity of the verified candidates' binding constraints.
+ *    mark incompatible sets (incompatible-sets.ts) and rank: passed, not verified, missed,
+ *    failed; within each, compatible first unless the brief's allowIncompatible; objective;
+ *    simpler first (rank.ts); flag the Pareto front; sensitivity of the verified candidates'
+ *    binding constraints.
  * Progress is reported through `onProgress(done, total)`, total = sets + verifications (the
  * verification count is known once the sets are solved, so total may shrink then);
  * `isCancelled()` is polled between steps.
