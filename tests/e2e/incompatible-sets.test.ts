@@ -19,18 +19,26 @@ describe('incompatible sets and ranking by hazard in the browser', () => {
 
     // A brief over soda crystals, calcium chloride hexahydrate, urea and ammonium chloride: soda and
     // calcium chloride precipitate calcium carbonate when they meet.
-    const token = (await (await context.request.post('/api/auth/login', { data: { email: 'designer@demo.test', password: 'packwright-demo' } })).json()).token as string;
-    const auth = { Authorization: `Bearer ${token}` };
-    const lib = (await (await context.request.get('/api/ingredients?pageSize=200', { headers: auth })).json()).items as { id: number; name: string }[];
-    const id = (name: string) => String(lib.find((i) => i.name === name)!.id);
+    const setup = await b.browser.newContext({ baseURL: b.baseUrl });
+    const login = await setup.request.post('/api/auth/login', { data: { email: 'designer@demo.test', password: 'packwright-demo' } });
+    expect(login.status()).toBe(200);
+    const auth = { Authorization: `Bearer ${(await login.json()).token as string}` };
+    const listed = await setup.request.get('/api/ingredients', { headers: auth, params: { pageSize: 200 } });
+    expect(listed.status(), await listed.text()).toBe(200);
+    const lib = (await listed.json()).items as { id: number; name: string }[];
+    const id = (name: string) => {
+      const hit = lib.find((i) => i.name === name);
+      if (!hit) throw new Error(`no ingredient named ${name}; found ${lib.map((i) => i.name).join(', ')}`);
+      return String(hit.id);
+    };
     const allowed = ['Sodium carbonate decahydrate', 'Calcium chloride hexahydrate', 'Urea', 'Ammonium chloride'].map(id);
-    const created = await context.request.post('/api/briefs', {
+    const created = await setup.request.post('/api/briefs', {
       headers: auth,
       data: { name: `Incompatible check ${Date.now().toString(36)}`, packType: 'cold', targetTempC: 15, reachWithinMin: 10, holdMin: 5, maxActives: 2, allowedIngredientIds: allowed },
     });
     expect(created.status()).toBe(201);
     const brief = (await created.json()).brief as { id: number };
-    const { runId } = await (await context.request.post(`/api/briefs/${brief.id}/runs`, { headers: auth })).json();
+    const { runId } = await (await setup.request.post(`/api/briefs/${brief.id}/runs`, { headers: auth })).json();
 
     await page.goto(`/runs/${runId}`);
     await page.getByRole('heading', { name: 'Candidates that meet the brief' }).waitFor({ timeout: 90_000 });
@@ -55,6 +63,7 @@ describe('incompatible sets and ranking by hazard in the browser', () => {
     }
     await header.scrollIntoViewIfNeeded();
     await b.screenshot(page, 'incompatible-03-sorted-by-hazard');
+    await setup.close();
     await context.close();
   }, 150_000);
 });
