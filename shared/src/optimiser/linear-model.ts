@@ -2,8 +2,8 @@ import type { Brief, ConcentrationCap, ConstraintKind } from '../schemas/briefs'
 import type { ChemistryPort } from '../thermal/chemistry-port';
 import { INERT_CP_J_PER_GK, REFERENCE_TEMP_C, WATER_CP_J_PER_GK, WATER_MOLAR_MASS_G_PER_MOL } from '../thermal/constants';
 import { PackModel } from '../thermal/pack-model';
-import { ingredientProcessSchema, type ReactionProcess } from '../thermal/process';
-import { reactionSignature } from '../thermal/reaction-partners';
+import { ingredientProcessSchema, type IngredientProcess, type ReactionProcess } from '../thermal/process';
+import { reactionSignature, suppliesReactant } from '../thermal/reaction-partners';
 import { resolveHeatExchange } from '../evaluation/heat-exchange';
 import { lumpedLoad } from '../evaluation/load';
 import type { IngredientSet, OptimiserIngredient, OptimiserWarning } from './types';
@@ -170,6 +170,8 @@ export interface ParsedIngredient {
   ingredient: OptimiserIngredient;
   model: PackModel;
   costPerG: number;
+  /** The ingredient's process as the schema reads it (defaults filled), parsed once per run. */
+  process: IngredientProcess;
 }
 
 /**
@@ -190,7 +192,7 @@ export function parseIngredient(port: ChemistryPort, ingredient: OptimiserIngred
   if (!(Number.isFinite(cost) && cost >= 0)) {
     throw new RangeError(`ingredient ${ingredient.id}: expected costPerKg ≥ 0 as a decimal, found ${String(ingredient.costPerKg)}`);
   }
-  return { ingredient, model, costPerG: cost / 1000 };
+  return { ingredient, model, costPerG: cost / 1000, process: ingredientProcessSchema.parse(process) };
 }
 
 /** True when the ingredient is water (the solvent). */
@@ -352,7 +354,7 @@ function reactionModel(port: ChemistryPort, lead: ParsedIngredient, partners: re
   if (!byKey) setModels.set(lead, (byKey = new Map()));
   let m = byKey.get(key);
   if (!m) {
-    const components = [lead, ...partners.map((q) => q.p)].map((p, i) => ({ key: p.ingredient.id, massG: i === 0 ? 1 : partners[i - 1]!.massG, process: p.ingredient.process! }));
+    const components = [lead, ...partners.map((q) => q.p)].map((p, i) => ({ key: p.ingredient.id, massG: i === 0 ? 1 : partners[i - 1]!.massG, process: p.process }));
     m = new PackModel(port, components, { packAreaM2, reactionPartners: 'from-pack' });
     byKey.set(key, m);
   }
@@ -386,10 +388,7 @@ function reactionModel(port: ChemistryPort, lead: ParsedIngredient, partners: re
  *   no column. Example: CaCl2·6H2O, L = 187 J/g at 29.8 °C.
  */
 export function setCoefficients(parsed: readonly ParsedIngredient[], ctx: Pick<ThermalContext, 'targetTempC' | 'packAreaM2'>, estimate: ConcentrationEstimate, port: ChemistryPort): IngredientCoefficients[] {
-  const processes = parsed.map((p) => {
-    const r = ingredientProcessSchema.safeParse(p.ingredient.process);
-    return r.success ? r.data : null;
-  });
+  const processes = parsed.map((p) => p.process);
   const out = parsed.map((p) => ingredientCoefficients(p, ctx.targetTempC, estimate, port));
   const leads = new Map<string, number>();
   const alone = (i: number): IngredientCoefficients => ({ ...out[i]!, ...reactionCoefficients(reactionModel(port, parsed[i]!, [], ctx.packAreaM2)) });
@@ -407,7 +406,7 @@ export function setCoefficients(parsed: readonly ParsedIngredient[], ctx: Pick<T
     let missing = false;
     for (const t of q.reactants) {
       if (t.key === 'H2O(l)' || t.key === q.ingredientKey) continue;
-      const k = processes.findIndex((o, j) => j !== i && ((o?.kind === 'dissolution' && o.solidKey === t.key) || (o?.kind === 'reaction' && o.basis !== 'premix' && o.ingredientKey === t.key && reactionSignature(o) === sig)));
+      const k = processes.findIndex((o, j) => j !== i && suppliesReactant(o, t.key, sig));
       if (k < 0) {
         missing = true;
         break;

@@ -73,6 +73,16 @@ export function reactionSignature(p: ReactionProcess): string {
 }
 
 /**
+ * Whether a component with this process brings reactant `key` to the reaction of signature `sig`:
+ * a dissolving solid of that species, or a (non-premix) member of the same reaction whose own
+ * reactant it is. The time model (below) and the linear model's partner rows use this one rule.
+ */
+export function suppliesReactant(process: IngredientProcess | null | undefined, key: string, sig: string): boolean {
+  if (process?.kind === 'dissolution') return process.solidKey === key;
+  return process?.kind === 'reaction' && process.basis !== 'premix' && process.ingredientKey === key && reactionSignature(process) === sig;
+}
+
+/**
  * The reactions of a pack, their partners taken from its components (see the module comment).
  *
  * @example setUpReactions(port, [ba(32 g), nh4cl(10.85 g as dissolution), water(0 g)])
@@ -112,7 +122,7 @@ export function setUpReactions(
     groups.set(sig, [...(groups.get(sig) ?? []), i]);
   });
 
-  for (const members of groups.values()) {
+  for (const [sig, members] of groups) {
     const first = components[members[0]!]!;
     const p = first.process as ReactionProcess;
     const label = members.map((i) => components[i]!.label).join(' + ');
@@ -131,7 +141,7 @@ export function setUpReactions(
       } else add(q.ingredientKey, i, c.massG / M(q.ingredientKey));
     }
     components.forEach((c, i) => {
-      if (c.process.kind === 'dissolution' && reactants.some((t) => t.key === (c.process as { solidKey: string }).solidKey) && massLeftG[i]! > 0) {
+      if (c.process.kind === 'dissolution' && reactants.some((t) => suppliesReactant(c.process, t.key, sig)) && massLeftG[i]! > 0) {
         add(c.process.solidKey, i, massLeftG[i]! / M(c.process.solidKey));
       }
     });
